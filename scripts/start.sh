@@ -1,0 +1,61 @@
+#!/usr/bin/env bash
+# `npm start`: install, provision PostgreSQL, migrate, seed the demo, build the client, serve.
+# Ctrl-C stops everything this script started, PostgreSQL included; the data stays in .data/.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/deps.sh
+source scripts/lib/postgres.sh
+source scripts/lib/services.sh
+
+ensure_node_modules
+export PORT=${PORT:-3000}
+mkdir -p .data
+
+SERVER_PID=
+cleanup() {
+  trap - EXIT INT TERM
+  [ -n "$SERVER_PID" ] && kill "$SERVER_PID" 2>/dev/null && wait "$SERVER_PID" 2>/dev/null
+  services_stop
+  pg_stop
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+if [ -z "${DATABASE_URL:-}" ]; then
+  pg_install_if_missing
+  export PGPORT=${PGPORT:-54329}
+  data=$(pg_data_dir "$PWD/.data/postgres-$PGPORT" "/tmp/duskhaul-$(basename "$PWD")-postgres-$PGPORT")
+  pg_start "$data" "$PGPORT"
+  pg_create_database "$PGPORT" duskhaul
+  export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/duskhaul"
+fi
+
+# A stable session secret per checkout unless one is configured.
+if [ -z "${SESSION_SECRET:-}" ]; then
+  [ -f .data/session-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('hex'))" >.data/session-secret
+  export SESSION_SECRET=$(cat .data/session-secret)
+fi
+
+services_start
+node --import tsx scripts/migrate.ts
+node --import tsx scripts/seed.ts --if-empty
+echo "[build] building the client…" >&2
+npx vite build --logLevel warn
+
+node --import tsx server/index.ts &
+SERVER_PID=$!
+node --import tsx scripts/wait-for-health.ts "http://127.0.0.1:$PORT/api/health" && cat <<MSG
+
+  Duskhaul is running at http://localhost:$PORT
+
+  Demo sign-ins (password: duskhaul-demo)
+    owner@demo.test     owner of Mesquite Flats Apiaries
+    planner@demo.test   planner
+    crew@demo.test      crew lead
+    grower@demo.test    a grower with contracts
+    grower2@demo.test   another grower of the same operation
+    owner@second.test   owner of a separate operation (isolation)
+
+  Ctrl-C stops the app and its database; the data is kept in .data/.
+MSG
+wait "$SERVER_PID"

@@ -1,0 +1,78 @@
+import express, { type RequestHandler } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { DataSource } from 'typeorm';
+import type { Env } from './config/env';
+import { AppError } from './errors/app-error';
+import { errorHandler } from './errors/error-handler';
+import { createSessionLayer } from './modules/session/session-middleware';
+import { sessionRouter } from './modules/session/session.router';
+import { healthRouter } from './modules/health/health.router';
+import { apiRouters } from './routes';
+
+export interface AppOptions {
+  db: DataSource;
+  env: Env;
+  log?: (error: unknown) => void;
+}
+
+/** The Express app: security headers, sessions, CSRF, the API, the client build, errors. */
+export function createApp({ db, env, log }: AppOptions) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', env.TRUST_PROXY_HOPS);
+  app.set('query parser', 'simple');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          manifestSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'none'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+          ...(env.HTTPS === 'true' ? { upgradeInsecureRequests: [] } : {}),
+        },
+      },
+      strictTransportSecurity: env.HTTPS === 'true',
+    }),
+  );
+
+  app.use('/api/health', healthRouter(db));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb', strict: true }));
+  const sessions = createSessionLayer(db, env);
+  api.use(...sessions.middleware);
+  api.use(sessions.csrfProtection as RequestHandler);
+  api.use('/session', sessionRouter(db, sessions));
+  for (const [mount, router] of apiRouters(db, sessions)) api.use(mount, router);
+  api.use((req) => {
+    throw new AppError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
+  });
+  app.use('/api', api);
+
+  const dist = path.resolve(env.CLIENT_DIST);
+  if (existsSync(path.join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+  }
+
+  app.use(errorHandler(log));
+  return app;
+}
+
+// Vite fingerprints files under /assets: cache them for a year.
+function immutableAssets(res: express.Response, filePath: string) {
+  if (filePath.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+}

@@ -1,0 +1,28 @@
+import 'reflect-metadata';
+import type { Server } from 'node:http';
+import { loadEnv } from './config/env';
+import { createDataSource } from './db/data-source';
+import { createApp } from './app';
+
+/** Starts the server: configuration → database → listen; stops cleanly on SIGINT/SIGTERM. */
+async function main() {
+  const env = loadEnv();
+  const db = createDataSource({ url: env.DATABASE_URL, poolSize: env.DATABASE_POOL_SIZE, statementTimeoutMs: env.DATABASE_STATEMENT_TIMEOUT_MS });
+  await db.initialize();
+  const app = createApp({ db, env });
+  const server: Server = app.listen(env.PORT, env.HOST, () => {
+    console.log(`[server] listening on http://${env.HOST}:${env.PORT}`);
+  });
+  const stop = () => {
+    server.close(() => void db.destroy().finally(() => process.exit(0)));
+    server.closeAllConnections();
+    setTimeout(() => process.exit(0), 3_000).unref();
+  };
+  process.on('SIGINT', stop);
+  process.on('SIGTERM', stop);
+}
+
+main().catch((error) => {
+  console.error('[server] failed to start:', error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,95 @@
+import type { RequestHandler } from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import type { Pool } from 'pg';
+import type { DataSource } from 'typeorm';
+import { csrfSync } from 'csrf-sync';
+import type { Env } from '../../config/env';
+import { SessionUsers } from './session-users';
+import { SignInThrottle } from './sign-in-throttle';
+import { verifyPassword } from './passwords';
+import type { SessionUser } from '../../../shared/schemas/users';
+
+declare module 'express-session' {
+  interface SessionData {
+    signedInAt?: number;
+  }
+}
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends SessionUser {}
+  }
+}
+
+/** Why a sign-in failed, as passport-local's verify callback reports it. */
+export interface SignInFailure {
+  message: string;
+}
+
+/** Sessions in PostgreSQL, passport-local sign-in, CSRF tokens and timeouts. */
+export function createSessionLayer(db: DataSource, env: Env) {
+  const users = new SessionUsers(db);
+  const throttle = new SignInThrottle(db);
+  const PgStore = connectPgSimple(session);
+  const pool = (db.driver as unknown as { master: Pool }).master;
+  const secure = env.HTTPS === 'true';
+
+  const sessionMiddleware = session({
+    name: secure ? '__Host-duskhaul' : 'duskhaul.sid',
+    secret: env.SESSION_SECRET,
+    store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure, path: '/', maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+  });
+
+  passport.use(
+    new LocalStrategy({ usernameField: 'email', passReqToCallback: true }, async (req, email, password, done) => {
+      try {
+        const address = req.ip ?? 'unknown';
+        await throttle.check(email, address);
+        const found = await users.findForSignIn(email);
+        const ok = await verifyPassword(found?.passwordHash ?? null, password);
+        if (!found || !ok || !found.active) {
+          await throttle.recordFailure(email, address);
+          // Unknown e-mail, wrong password and deactivated account get the same answer.
+          return done(null, false, { message: 'Wrong e-mail or password.' });
+        }
+        await throttle.recordSuccess(email, address);
+        return done(null, found.user);
+      } catch (error) {
+        return done(error);
+      }
+    }),
+  );
+  passport.serializeUser((user, done) => done(null, (user as SessionUser).id));
+  passport.deserializeUser((id: string, done) => {
+    users.findActive(id).then((user) => done(null, user ?? false), done);
+  });
+
+  // Ends a session past its absolute lifetime, however active it has been.
+  const absoluteTimeout: RequestHandler = (req, _res, next) => {
+    const signedInAt = req.session?.signedInAt;
+    if (signedInAt && Date.now() - signedInAt > env.SESSION_ABSOLUTE_HOURS * 3_600_000) {
+      req.session.destroy(() => next());
+      return;
+    }
+    next();
+  };
+
+  const csrf = csrfSync({ getTokenFromRequest: (req) => req.get('x-csrf-token') });
+
+  return {
+    users,
+    middleware: [sessionMiddleware, absoluteTimeout, passport.initialize(), passport.session()] as RequestHandler[],
+    csrfProtection: csrf.csrfSynchronisedProtection,
+    generateCsrfToken: csrf.generateToken,
+  };
+}
+
+export type SessionLayer = ReturnType<typeof createSessionLayer>;

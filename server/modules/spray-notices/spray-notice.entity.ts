@@ -1,0 +1,17 @@
+import { Column, Entity } from 'typeorm';
+import { EditableRecord } from '../../db/base-columns';
+
+/** A grower's planned pesticide application at a site. */
+@Entity('spray_notices')
+export class SprayNotice extends EditableRecord {
+  @Column({ type: 'uuid' }) growerId: string;
+  @Column({ type: 'uuid' }) siteId: string;
+  @Column({ type: 'timestamptz' }) startsAt: Date;
+  @Column({ type: 'timestamptz' }) endsAt: Date;
+  @Column({ type: 'text' }) product: string;
+  @Column({ type: 'text' }) notes: string;
+  @Column({ type: 'text' }) status: string;
+  @Column({ type: 'text', nullable: true }) action: string | null;
+  @Column({ type: 'uuid', nullable: true }) acknowledgedBy: string | null;
+  @Column({ type: 'timestamptz', nullable: true }) acknowledgedAt: Date | null;
+}
