@@ -7,9 +7,9 @@ export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'test-output', '.data'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
+  { languageOptions: { globals: { ...globals.browser, ...globals.node } } },
   {
     files: ['**/*.{ts,tsx}'],
-    languageOptions: { globals: { ...globals.browser, ...globals.node } },
     plugins: { 'react-hooks': reactHooks },
     rules: {
       ...reactHooks.configs.recommended.rules,

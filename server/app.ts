@@ -56,7 +56,7 @@ export function createApp({ db, env, log }: AppOptions) {
   api.use(...sessions.middleware);
   api.use(sessions.csrfProtection as RequestHandler);
   api.use('/session', sessionRouter(db, sessions));
-  for (const [mount, router] of apiRouters(db, sessions)) api.use(mount, router);
+  for (const [mount, router] of apiRouters(db)) api.use(mount, router);
   api.use((req) => {
     throw new AppError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
   });

@@ -1,13 +1,28 @@
 import type { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import type { SessionLayer } from './modules/session/session-middleware';
 import { yardsRouter } from './modules/yards/yards.router';
+import { sitesRouter } from './modules/sites/sites.router';
+import { growersRouter } from './modules/growers/growers.router';
+import { contractsRouter } from './modules/contracts/contracts.router';
+import { trucksRouter } from './modules/trucks/trucks.router';
+import { movesRouter } from './modules/moves/moves.router';
+import { hiveSetupsRouter } from './modules/hive-setups/hive-setups.router';
+import { colonyLotsRouter } from './modules/colony-lots/colony-lots.router';
 import { ledgerRouter } from './modules/ledger/ledger.router';
+import { usersRouter } from './modules/users/users.router';
 
 /** Every API resource and where it is mounted under /api. */
-export function apiRouters(db: DataSource, _sessions: SessionLayer): Array<[string, Router]> {
+export function apiRouters(db: DataSource): Array<[string, Router]> {
   return [
     ['/yards', yardsRouter(db)],
+    ['/sites', sitesRouter(db)],
+    ['/growers', growersRouter(db)],
+    ['/contracts', contractsRouter(db)],
+    ['/trucks', trucksRouter(db)],
+    ['/moves', movesRouter(db)],
+    ['/hive-setups', hiveSetupsRouter(db)],
+    ['/colony-lots', colonyLotsRouter(db)],
     ['/ledger', ledgerRouter(db)],
+    ['/users', usersRouter(db)],
   ];
 }

@@ -13,7 +13,9 @@ export const truckFields = z.strictObject({
   legalGrossKg: z.number().positive().max(100_000).optional(),
   notes: text(2000).optional(),
 });
-export const truckCreateRequest = truckFields;
+export const truckCreateRequest = truckFields.extend({
+  legalGrossKg: z.number().positive().max(100_000).default(interstateGrossLimitKg),
+});
 export const truckUpdateRequest = truckFields.partial().extend({ version });
 export const truckListQuery = z.strictObject({ ...pagination, archived: includeArchived });
 
