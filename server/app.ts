@@ -55,8 +55,16 @@ export function createApp({ db, env, log }: AppOptions) {
   const sessions = createSessionLayer(db, env);
   api.use(...sessions.middleware);
   api.use(sessions.csrfProtection as RequestHandler);
-  api.use('/session', sessionRouter(db, sessions));
-  for (const [mount, router] of apiRouters(db)) api.use(mount, router);
+  const mounted: Array<[string, express.Router]> = [
+    ['/session', sessionRouter(db, sessions)],
+    ...apiRouters(db),
+  ];
+  for (const [mount, router] of mounted) api.use(mount, router);
+  // Every API route as "METHOD /api/path", for the authorization matrix test and docs.
+  app.locals.apiRoutes = [
+    'GET /api/health',
+    ...mounted.flatMap(([mount, router]) => routesOf(`/api${mount}`, router)),
+  ];
   api.use((req) => {
     throw new AppError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
   });
@@ -72,7 +80,17 @@ export function createApp({ db, env, log }: AppOptions) {
   return app;
 }
 
+function routesOf(prefix: string, router: express.Router): string[] {
+  return router.stack.flatMap((layer) => {
+    const route = layer.route as { path: string; methods: Record<string, boolean> } | undefined;
+    if (!route) return [];
+    const path = route.path === '/' ? prefix : `${prefix}${route.path}`;
+    return Object.keys(route.methods).map((method) => `${method.toUpperCase()} ${path}`);
+  });
+}
+
 // Vite fingerprints files under /assets: cache them for a year.
 function immutableAssets(res: express.Response, filePath: string) {
-  if (filePath.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+  if (filePath.includes(`${path.sep}assets${path.sep}`))
+    res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
 }

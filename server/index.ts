@@ -7,7 +7,11 @@ import { createApp } from './app';
 /** Starts the server: configuration → database → listen; stops cleanly on SIGINT/SIGTERM. */
 async function main() {
   const env = loadEnv();
-  const db = createDataSource({ url: env.DATABASE_URL, poolSize: env.DATABASE_POOL_SIZE, statementTimeoutMs: env.DATABASE_STATEMENT_TIMEOUT_MS });
+  const db = createDataSource({
+    url: env.DATABASE_URL,
+    poolSize: env.DATABASE_POOL_SIZE,
+    statementTimeoutMs: env.DATABASE_STATEMENT_TIMEOUT_MS,
+  });
   await db.initialize();
   const app = createApp({ db, env });
   const server: Server = app.listen(env.PORT, env.HOST, () => {

@@ -17,9 +17,17 @@ const envSchema = z.object({
   // Signs session cookies. At least 32 characters.
   SESSION_SECRET: z.string().min(32),
   // Minutes without a request before a session ends.
-  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).default(12 * 60),
+  SESSION_IDLE_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(12 * 60),
   // Hours after sign-in at which a session ends however active it is.
-  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).default(7 * 24),
+  SESSION_ABSOLUTE_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(7 * 24),
   // Set to "true" when the app is served over HTTPS (directly or behind a proxy): Secure cookies
   // with the __Host- prefix.
   HTTPS: z.enum(['true', 'false']).default('false'),

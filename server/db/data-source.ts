@@ -14,7 +14,11 @@ export interface DatabaseOptions {
  * A TypeORM data source over node-postgres with every timeout set, so an unreachable database
  * fails requests quickly (503) instead of hanging them.
  */
-export function createDataSource({ url, poolSize = 10, statementTimeoutMs = 10_000 }: DatabaseOptions) {
+export function createDataSource({
+  url,
+  poolSize = 10,
+  statementTimeoutMs = 10_000,
+}: DatabaseOptions) {
   return new DataSource({
     type: 'postgres',
     url,

@@ -1,4 +1,10 @@
-import type { DataSource, EntityManager, EntityTarget, ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type {
+  DataSource,
+  EntityManager,
+  EntityTarget,
+  ObjectLiteral,
+  SelectQueryBuilder,
+} from 'typeorm';
 import type { ListResult } from '../../shared/schemas/common';
 import { AppError } from '../errors/app-error';
 
@@ -23,7 +29,10 @@ export class TenantRepository<T extends ObjectLiteral & { id: string; version: n
   ) {}
 
   query(db: Db, operationId: string, alias = 'record'): SelectQueryBuilder<T> {
-    return db.getRepository(this.entity).createQueryBuilder(alias).where(`${alias}.operationId = :operationId`, { operationId });
+    return db
+      .getRepository(this.entity)
+      .createQueryBuilder(alias)
+      .where(`${alias}.operationId = :operationId`, { operationId });
   }
 
   /** A page of records, newest filters applied by `refine`, with the total before paging. */
@@ -36,7 +45,8 @@ export class TenantRepository<T extends ObjectLiteral & { id: string; version: n
     const qb = this.query(db, operationId);
     if (!options.archived) qb.andWhere('record.archivedAt IS NULL');
     refine?.(qb);
-    if (options.sort) qb.orderBy(`record.${options.sort}`, options.order === 'desc' ? 'DESC' : 'ASC', 'NULLS LAST');
+    if (options.sort)
+      qb.orderBy(`record.${options.sort}`, options.order === 'desc' ? 'DESC' : 'ASC', 'NULLS LAST');
     qb.addOrderBy('record.id', 'ASC').take(options.limit).skip(options.offset);
     const [items, total] = await qb.getManyAndCount();
     return { items, total };
@@ -63,18 +73,27 @@ export class TenantRepository<T extends ObjectLiteral & { id: string; version: n
   }
 
   /** Applies `values` when the stored version is `version`; 409 when it is not, 404 when gone. */
-  async update(db: Db, operationId: string, id: string, version: number, values: Partial<T>): Promise<T> {
+  async update(
+    db: Db,
+    operationId: string,
+    id: string,
+    version: number,
+    values: Partial<T>,
+  ): Promise<T> {
     const set = Object.fromEntries(Object.entries(values).filter(([, v]) => v !== undefined));
     const result = await db
       .getRepository(this.entity)
       .createQueryBuilder()
       .update()
       .set({ ...set, version: () => 'version + 1' } as never)
-      .where('id = :id AND operation_id = :operationId AND version = :version AND archived_at IS NULL', {
-        id,
-        operationId,
-        version,
-      })
+      .where(
+        'id = :id AND operation_id = :operationId AND version = :version AND archived_at IS NULL',
+        {
+          id,
+          operationId,
+          version,
+        },
+      )
       .execute();
     if (result.affected !== 1) await this.explainMissedWrite(db, operationId, id);
     return this.get(db, operationId, id);
@@ -87,11 +106,14 @@ export class TenantRepository<T extends ObjectLiteral & { id: string; version: n
       .createQueryBuilder()
       .update()
       .set({ archivedAt: () => 'now()', version: () => 'version + 1' } as never)
-      .where('id = :id AND operation_id = :operationId AND version = :version AND archived_at IS NULL', {
-        id,
-        operationId,
-        version,
-      })
+      .where(
+        'id = :id AND operation_id = :operationId AND version = :version AND archived_at IS NULL',
+        {
+          id,
+          operationId,
+          version,
+        },
+      )
       .execute();
     if (result.affected !== 1) await this.explainMissedWrite(db, operationId, id);
     return this.get(db, operationId, id);

@@ -35,7 +35,10 @@ export class AppError extends Error {
     return new AppError(
       400,
       'validation_failed',
-      message ?? (names.length ? `Check these fields: ${[...new Set(names)].join(', ')}.` : 'The request is not valid.'),
+      message ??
+        (names.length
+          ? `Check these fields: ${[...new Set(names)].join(', ')}.`
+          : 'The request is not valid.'),
       details,
     );
   }

@@ -4,7 +4,10 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   const e = error as { code?: string; message?: string; driverError?: unknown };
   if (e.driverError && isDatabaseUnavailable(e.driverError)) return true;
   const code = e.code ?? '';
-  if (['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'EHOSTUNREACH', 'ENOTFOUND'].includes(code)) return true;
+  if (
+    ['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'EHOSTUNREACH', 'ENOTFOUND'].includes(code)
+  )
+    return true;
   // 08xxx connection exceptions; 57P01-57P03 admin shutdown, crash shutdown, cannot connect now.
   if (/^08/.test(code) || ['57P01', '57P02', '57P03'].includes(code)) return true;
   const message = e.message ?? '';

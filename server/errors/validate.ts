@@ -8,7 +8,10 @@ export function fieldIssues(error: z.ZodError): FieldIssue[] {
     const path = issue.path.map(String);
     // Unknown keys are reported by zod at the parent; name the keys themselves.
     if (issue.code === 'unrecognized_keys') {
-      return { field: [...path, ...issue.keys].join('.') || '(body)', message: `Not accepted here: ${issue.keys.join(', ')}.` };
+      return {
+        field: [...path, ...issue.keys].join('.') || '(body)',
+        message: `Not accepted here: ${issue.keys.join(', ')}.`,
+      };
     }
     return { field: path.join('.') || '(body)', message: issue.message };
   });

@@ -27,7 +27,10 @@ interface ResourceRoutes<L, C, U> {
  * The standard routes of a resource: GET / (list), GET /:id, POST /, PATCH /:id (with version),
  * POST /:id/archive (with version). Each authorises, validates and hands over to the service.
  */
-export function resourceRouter<L, C, U>(service: ResourceService<L, C, U>, routes: ResourceRoutes<L, C, U>) {
+export function resourceRouter<L, C, U>(
+  service: ResourceService<L, C, U>,
+  routes: ResourceRoutes<L, C, U>,
+) {
   const router = Router();
   const read = allow(...routes.readRoles);
   const write = allow(...routes.writeRoles);
@@ -38,13 +41,23 @@ export function resourceRouter<L, C, U>(service: ResourceService<L, C, U>, route
     res.json(await service.get(actorOf(req), idParam(req)));
   });
   router.post('/', write, async (req, res) => {
-    res.status(201).json(await service.create(actorOf(req), parseOrThrow(routes.createSchema, req.body)));
+    res
+      .status(201)
+      .json(await service.create(actorOf(req), parseOrThrow(routes.createSchema, req.body)));
   });
   router.patch('/:id', write, async (req, res) => {
-    res.json(await service.update(actorOf(req), idParam(req), parseOrThrow(routes.updateSchema, req.body)));
+    res.json(
+      await service.update(actorOf(req), idParam(req), parseOrThrow(routes.updateSchema, req.body)),
+    );
   });
   router.post('/:id/archive', write, async (req, res) => {
-    res.json(await service.archive(actorOf(req), idParam(req), parseOrThrow(archiveRequest, req.body).version));
+    res.json(
+      await service.archive(
+        actorOf(req),
+        idParam(req),
+        parseOrThrow(archiveRequest, req.body).version,
+      ),
+    );
   });
   return router;
 }

@@ -27,11 +27,18 @@ interface SimpleResource<T extends Versioned, V> {
  * A record with no rules beyond roles, validation, tenant-scoped references and versions
  * (hive setups, trucks, colony lots). Resources with more to them have their own services.
  */
-export function simpleResourceRouter<T extends Versioned, V>(db: DataSource, resource: SimpleResource<T, V>) {
+export function simpleResourceRouter<T extends Versioned, V>(
+  db: DataSource,
+  resource: SimpleResource<T, V>,
+) {
   const { repository, present } = resource;
 
   // A reference to another operation's record reads as "no such record" (400), never a link.
-  const checkReferences = async (tx: EntityManager, actor: Actor, input: Record<string, unknown>) => {
+  const checkReferences = async (
+    tx: EntityManager,
+    actor: Actor,
+    input: Record<string, unknown>,
+  ) => {
     for (const { field, repository: referenced } of resource.references ?? []) {
       const value = input[field];
       if (typeof value !== 'string') continue;
@@ -41,10 +48,17 @@ export function simpleResourceRouter<T extends Versioned, V>(db: DataSource, res
     }
   };
 
-  const service: ResourceService<ListQuery, Record<string, unknown>, { version: number } & Record<string, unknown>> = {
+  const service: ResourceService<
+    ListQuery,
+    Record<string, unknown>,
+    { version: number } & Record<string, unknown>
+  > = {
     async list(actor, query) {
-      const page = await repository.list(db, actor.operationId, { ...query, sort: resource.defaultSort ?? 'name' }, (qb) =>
-        resource.refineList?.(qb, query),
+      const page = await repository.list(
+        db,
+        actor.operationId,
+        { ...query, sort: resource.defaultSort ?? 'name' },
+        (qb) => resource.refineList?.(qb, query),
       );
       return { items: page.items.map((r) => present(r, actor)), total: page.total };
     },
@@ -66,7 +80,10 @@ export function simpleResourceRouter<T extends Versioned, V>(db: DataSource, res
       return present(record, actor);
     },
     async archive(actor, id, version) {
-      return present(await db.transaction((tx) => repository.archive(tx, actor.operationId, id, version)), actor);
+      return present(
+        await db.transaction((tx) => repository.archive(tx, actor.operationId, id, version)),
+        actor,
+      );
     },
   };
   return resourceRouter(service, resource);

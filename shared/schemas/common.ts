@@ -23,7 +23,10 @@ export const text = (max: number) =>
 /** A required name: trimmed, 1–120 characters. */
 export const name = text(120).trim().min(1, 'Required.');
 
-export const latitude = z.number().min(-90, 'Latitude is between -90 and 90.').max(90, 'Latitude is between -90 and 90.');
+export const latitude = z
+  .number()
+  .min(-90, 'Latitude is between -90 and 90.')
+  .max(90, 'Latitude is between -90 and 90.');
 export const longitude = z
   .number()
   .min(-180, 'Longitude is between -180 and 180.')
@@ -39,7 +42,10 @@ export const pagination = {
 };
 
 /** `?archived=true` includes archived records in a list. */
-export const includeArchived = z.enum(['true', 'false']).default('false').transform((v) => v === 'true');
+export const includeArchived = z
+  .enum(['true', 'false'])
+  .default('false')
+  .transform((v) => v === 'true');
 
 export const sortOrder = z.enum(['asc', 'desc']).default('asc');
 

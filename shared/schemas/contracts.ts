@@ -6,7 +6,16 @@ import { calendarDate, id, includeArchived, pagination, sortOrder, text, version
  * A contract's life: drafted, offered to the grower, agreed (or turned down), colonies in the
  * bloom, released after bloom, settled when paid up; withdrawn at any point before settling.
  */
-export const contractStatuses = ['draft', 'offered', 'agreed', 'turned-down', 'in-bloom', 'released', 'settled', 'withdrawn'] as const;
+export const contractStatuses = [
+  'draft',
+  'offered',
+  'agreed',
+  'turned-down',
+  'in-bloom',
+  'released',
+  'settled',
+  'withdrawn',
+] as const;
 export type ContractStatus = (typeof contractStatuses)[number];
 
 const money = z.number().int('Whole cents.').min(0).max(100_000_000);
@@ -26,7 +35,12 @@ export const contractFields = z.strictObject({
   deliveryStartOn: calendarDate,
   deliveryEndOn: calendarDate,
   removalOn: calendarDate.nullish(),
-  sprayNoticeHours: z.number().int().min(0).max(24 * 14).optional(),
+  sprayNoticeHours: z
+    .number()
+    .int()
+    .min(0)
+    .max(24 * 14)
+    .optional(),
   terms: text(8000).optional(),
   internalNotes: text(4000).optional(),
 });
@@ -37,12 +51,18 @@ const removalAfterDelivery = (c: { deliveryStartOn?: string; removalOn?: string 
   !c.removalOn || !c.deliveryStartOn || c.removalOn >= c.deliveryStartOn;
 
 export const contractCreateRequest = contractFields
-  .refine(windowInOrder, { path: ['deliveryEndOn'], message: 'The delivery window ends on or after it starts.' })
+  .refine(windowInOrder, {
+    path: ['deliveryEndOn'],
+    message: 'The delivery window ends on or after it starts.',
+  })
   .refine(removalAfterDelivery, { path: ['removalOn'], message: 'Removal comes after delivery.' });
 export const contractUpdateRequest = contractFields
   .partial()
   .extend({ version })
-  .refine(windowInOrder, { path: ['deliveryEndOn'], message: 'The delivery window ends on or after it starts.' })
+  .refine(windowInOrder, {
+    path: ['deliveryEndOn'],
+    message: 'The delivery window ends on or after it starts.',
+  })
   .refine(removalAfterDelivery, { path: ['removalOn'], message: 'Removal comes after delivery.' });
 
 export const contractListQuery = z.strictObject({
@@ -52,7 +72,9 @@ export const contractListQuery = z.strictObject({
   season: z.coerce.number().int().min(2000).max(2100).optional(),
   growerId: id.optional(),
   archived: includeArchived,
-  sort: z.enum(['deliveryStartOn', 'season', 'coloniesOrdered', 'createdAt']).default('deliveryStartOn'),
+  sort: z
+    .enum(['deliveryStartOn', 'season', 'coloniesOrdered', 'createdAt'])
+    .default('deliveryStartOn'),
   order: sortOrder,
 });
 

@@ -6,7 +6,10 @@ import type { Polygon } from 'geojson';
 export const maxBoundaryVertices = 5_000;
 
 const position = z.tuple([
-  z.number().min(-180, 'Longitude is between -180 and 180.').max(180, 'Longitude is between -180 and 180.'),
+  z
+    .number()
+    .min(-180, 'Longitude is between -180 and 180.')
+    .max(180, 'Longitude is between -180 and 180.'),
   z.number().min(-90, 'Latitude is between -90 and 90.').max(90, 'Latitude is between -90 and 90.'),
 ]);
 
@@ -14,7 +17,10 @@ const ring = z
   .array(position)
   .min(4, 'A boundary ring needs at least 4 positions (the first repeated last).')
   .max(maxBoundaryVertices, `At most ${maxBoundaryVertices} vertices.`)
-  .refine((r) => r.length < 2 || (r[0][0] === r[r.length - 1][0] && r[0][1] === r[r.length - 1][1]), 'The ring must end where it starts.');
+  .refine(
+    (r) => r.length < 2 || (r[0][0] === r[r.length - 1][0] && r[0][1] === r[r.length - 1][1]),
+    'The ring must end where it starts.',
+  );
 
 /** A GeoJSON Polygon (RFC 7946) whose rings close and whose edges do not cross. */
 export const polygon = z

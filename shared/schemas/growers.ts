@@ -3,7 +3,13 @@ import { includeArchived, name, pagination, sortOrder, text, version } from './c
 
 export const growerContact = z.strictObject({
   name,
-  email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter an e-mail address.')).nullish(),
+  email: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .max(254)
+    .pipe(z.email('Enter an e-mail address.'))
+    .nullish(),
   phone: text(40).nullish(),
   title: text(80).optional(),
 });

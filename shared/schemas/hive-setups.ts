@@ -7,7 +7,10 @@ export type BoxSize = (typeof boxSizes)[number];
 /** One box of a hive stack and how full of honey it is (0–1). */
 export const hiveBox = z.strictObject({
   size: z.enum(boxSizes),
-  honeyFill: z.number().min(0, 'Honey fill is between 0 and 1.').max(1, 'Honey fill is between 0 and 1.'),
+  honeyFill: z
+    .number()
+    .min(0, 'Honey fill is between 0 and 1.')
+    .max(1, 'Honey fill is between 0 and 1.'),
 });
 export type HiveBox = z.infer<typeof hiveBox>;
 

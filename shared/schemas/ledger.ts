@@ -18,7 +18,11 @@ export const ledgerEntryCreateRequest = z
     lotId: id,
     kind: z.enum(ledgerKinds),
     occurredOn: calendarDate,
-    colonies: z.number().int('A whole number of colonies.').min(1, 'At least 1 colony.').max(100_000),
+    colonies: z
+      .number()
+      .int('A whole number of colonies.')
+      .min(1, 'At least 1 colony.')
+      .max(100_000),
     from: place.nullish(),
     to: place.nullish(),
     reason: text(1000).trim().min(1, 'Say why.'),
@@ -35,15 +39,31 @@ export const ledgerEntryCreateRequest = z
     const hasTo = Boolean(entry.to);
     if (entry.kind === 'correction') {
       if (hasFrom === hasTo) {
-        ctx.addIssue({ code: 'custom', path: ['from'], message: 'A correction either removes (from) or adds (to) colonies.' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['from'],
+          message: 'A correction either removes (from) or adds (to) colonies.',
+        });
       }
       return;
     }
     if (need[0] !== hasFrom) {
-      ctx.addIssue({ code: 'custom', path: ['from'], message: need[0] ? `A ${entry.kind} needs the place the colonies leave.` : `A ${entry.kind} has no "from" place.` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['from'],
+        message: need[0]
+          ? `A ${entry.kind} needs the place the colonies leave.`
+          : `A ${entry.kind} has no "from" place.`,
+      });
     }
     if (need[1] !== hasTo) {
-      ctx.addIssue({ code: 'custom', path: ['to'], message: need[1] ? `A ${entry.kind} needs the place the colonies go to.` : `A ${entry.kind} has no "to" place.` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['to'],
+        message: need[1]
+          ? `A ${entry.kind} needs the place the colonies go to.`
+          : `A ${entry.kind} has no "to" place.`,
+      });
     }
     if (entry.kind === 'move' && entry.from && entry.to && entry.from.id === entry.to.id) {
       ctx.addIssue({ code: 'custom', path: ['to'], message: 'A move goes to a different place.' });

@@ -3,7 +3,15 @@ import { calendarDate, id, includeArchived, name, pagination, text, version } fr
 import { placeKinds } from './ledger';
 
 /** A move's life: drafted, planned, loading at the yards, rolling, placed, closed (or cancelled). */
-export const moveStatuses = ['draft', 'planned', 'loading', 'rolling', 'placed', 'closed', 'cancelled'] as const;
+export const moveStatuses = [
+  'draft',
+  'planned',
+  'loading',
+  'rolling',
+  'placed',
+  'closed',
+  'cancelled',
+] as const;
 export type MoveStatus = (typeof moveStatuses)[number];
 
 /** Which status may follow which. */
@@ -35,7 +43,12 @@ export const moveFields = z.strictObject({
   destinationIds: z.array(id).min(1, 'Choose a destination.').max(10),
   contractId: id.nullish(),
   drivers: z.union([z.literal(1), z.literal(2)]).optional(),
-  loadingMinutes: z.number().int().min(0).max(24 * 60).optional(),
+  loadingMinutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(24 * 60)
+    .optional(),
   averageSpeedKmh: z.number().positive('Speed must be more than 0.').max(130).optional(),
   origins: z.array(moveOrigin).min(1, 'Take colonies from at least one yard.').max(50),
   loads: z.array(moveLoadInput).max(100).optional(),

@@ -1,14 +1,39 @@
 import { z } from 'zod';
 import { polygon } from './geojson';
-import { calendarDate, id, includeArchived, latitude, longitude, name, pagination, sortOrder, text, version } from './common';
+import {
+  calendarDate,
+  id,
+  includeArchived,
+  latitude,
+  longitude,
+  name,
+  pagination,
+  sortOrder,
+  text,
+  version,
+} from './common';
 
 export const siteKinds = ['orchard', 'seed-field', 'honey'] as const;
 export type SiteKind = (typeof siteKinds)[number];
 
 /** Crop keys, lower-case English, as GET /api/crops lists them. */
 export const cropKeys = [
-  'almond', 'apple', 'pear', 'plum', 'cherry', 'blueberry', 'cranberry', 'cucumber', 'melon',
-  'watermelon', 'squash', 'canola', 'alfalfa-seed', 'sunflower', 'avocado', 'honey',
+  'almond',
+  'apple',
+  'pear',
+  'plum',
+  'cherry',
+  'blueberry',
+  'cranberry',
+  'cucumber',
+  'melon',
+  'watermelon',
+  'squash',
+  'canola',
+  'alfalfa-seed',
+  'sunflower',
+  'avocado',
+  'honey',
 ] as const;
 export type CropKey = (typeof cropKeys)[number];
 
@@ -32,7 +57,10 @@ const bloomInOrder = (s: { bloomStartOn?: string | null; bloomEndOn?: string | n
   !s.bloomStartOn || !s.bloomEndOn || s.bloomStartOn <= s.bloomEndOn;
 
 export const siteCreateRequest = siteFields
-  .refine(pointOrBoundary, { path: ['boundary'], message: 'Give a boundary or a point (latitude and longitude).' })
+  .refine(pointOrBoundary, {
+    path: ['boundary'],
+    message: 'Give a boundary or a point (latitude and longitude).',
+  })
   .refine(bloomInOrder, { path: ['bloomEndOn'], message: 'Bloom ends on or after it starts.' });
 export const siteUpdateRequest = siteFields
   .partial()

@@ -11,14 +11,40 @@ export const password = z
   .string()
   .min(8, 'At least 8 characters.')
   .max(256, 'At most 256 characters.')
-  .refine((p) => !commonPasswords.has(p.toLowerCase()), 'This password is too common; choose another.');
+  .refine(
+    (p) => !commonPasswords.has(p.toLowerCase()),
+    'This password is too common; choose another.',
+  );
 
 // The most used passwords of public breach lists (a short excerpt kept here; from memory).
 const commonPasswords = new Set([
-  'password', 'password1', 'password123', '12345678', '123456789', '1234567890', 'qwerty123',
-  'qwertyuiop', '11111111', '00000000', 'iloveyou', 'sunshine', 'princess', 'football',
-  'baseball', 'welcome1', 'letmein1', 'abc12345', 'passw0rd', 'trustno1', 'superman',
-  'starwars', 'whatever', 'dragon12', 'monkey12', 'changeme', 'administrator',
+  'password',
+  'password1',
+  'password123',
+  '12345678',
+  '123456789',
+  '1234567890',
+  'qwerty123',
+  'qwertyuiop',
+  '11111111',
+  '00000000',
+  'iloveyou',
+  'sunshine',
+  'princess',
+  'football',
+  'baseball',
+  'welcome1',
+  'letmein1',
+  'abc12345',
+  'passw0rd',
+  'trustno1',
+  'superman',
+  'starwars',
+  'whatever',
+  'dragon12',
+  'monkey12',
+  'changeme',
+  'administrator',
 ]);
 
 export const signInRequest = z.strictObject({

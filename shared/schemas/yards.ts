@@ -1,5 +1,15 @@
 import { z } from 'zod';
-import { calendarDate, includeArchived, latitude, longitude, name, pagination, sortOrder, text, version } from './common';
+import {
+  calendarDate,
+  includeArchived,
+  latitude,
+  longitude,
+  name,
+  pagination,
+  sortOrder,
+  text,
+  version,
+} from './common';
 
 /** What a planner enters for a yard; optional fields default on the server. */
 export const yardFields = z.strictObject({

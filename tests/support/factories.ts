@@ -21,14 +21,19 @@ export async function createOperation(db: DataSource, name = 'Test operation') {
 }
 
 export async function createGrower(db: DataSource, operationId: string, name = 'Test grower') {
-  const [row] = await db.query(`INSERT INTO growers (operation_id, name, internal_notes) VALUES ($1, $2, 'internal: pays late') RETURNING id`, [
-    operationId,
-    name,
-  ]);
+  const [row] = await db.query(
+    `INSERT INTO growers (operation_id, name, internal_notes) VALUES ($1, $2, 'internal: pays late') RETURNING id`,
+    [operationId, name],
+  );
   return row.id as string;
 }
 
-export async function createUser(db: DataSource, operationId: string, role: Role, growerId: string | null = null): Promise<TestUser> {
+export async function createUser(
+  db: DataSource,
+  operationId: string,
+  role: Role,
+  growerId: string | null = null,
+): Promise<TestUser> {
   const email = `${role}-${randomUUID().slice(0, 8)}@example.test`;
   const [row] = await db.query(
     `INSERT INTO users (operation_id, email, name, role, grower_id, password_hash) VALUES ($1, $2, $3, $4, $5, $6) RETURNING id`,
@@ -57,7 +62,13 @@ export async function createCrew(db: DataSource) {
 export async function createHiveSetup(db: DataSource, operationId: string) {
   const [row] = await db.query(
     `INSERT INTO hive_setups (operation_id, name, boxes) VALUES ($1, 'Two deeps', $2) RETURNING id`,
-    [operationId, JSON.stringify([{ size: 'deep', honeyFill: 0.5 }, { size: 'deep', honeyFill: 0.2 }])],
+    [
+      operationId,
+      JSON.stringify([
+        { size: 'deep', honeyFill: 0.5 },
+        { size: 'deep', honeyFill: 0.2 },
+      ]),
+    ],
   );
   return row.id as string;
 }
@@ -80,7 +91,14 @@ export async function createYard(db: DataSource, operationId: string, name = 'Te
 }
 
 /** Puts colonies of a lot into a yard through a purchase entry (the ledger is the only way). */
-export async function buyColonies(db: DataSource, operationId: string, lotId: string, yardId: string, colonies: number, on = '2026-01-01') {
+export async function buyColonies(
+  db: DataSource,
+  operationId: string,
+  lotId: string,
+  yardId: string,
+  colonies: number,
+  on = '2026-01-01',
+) {
   await db.query(
     `INSERT INTO ledger_entries (operation_id, lot_id, kind, occurred_on, colonies, to_kind, to_id, reason)
      VALUES ($1, $2, 'purchase', $3, $4, 'yard', $5, 'test stock')`,

@@ -35,19 +35,38 @@ export async function anonymousClient(app: TestApp['app']): Promise<Client> {
     agent,
     csrf: session.body.csrfToken,
     get: (url) => agent.get(url),
-    post: (url, body) => agent.post(url).set('X-CSRF-Token', client.csrf).send(body ?? {}),
-    patch: (url, body) => agent.patch(url).set('X-CSRF-Token', client.csrf).send(body ?? {}),
-    put: (url, body) => agent.put(url).set('X-CSRF-Token', client.csrf).send(body ?? {}),
+    post: (url, body) =>
+      agent
+        .post(url)
+        .set('X-CSRF-Token', client.csrf)
+        .send(body ?? {}),
+    patch: (url, body) =>
+      agent
+        .patch(url)
+        .set('X-CSRF-Token', client.csrf)
+        .send(body ?? {}),
+    put: (url, body) =>
+      agent
+        .put(url)
+        .set('X-CSRF-Token', client.csrf)
+        .send(body ?? {}),
     delete: (url) => agent.delete(url).set('X-CSRF-Token', client.csrf),
   };
   return client;
 }
 
 /** A client signed in as the given user. */
-export async function signedInClient(app: TestApp['app'], email: string, password: string): Promise<Client> {
+export async function signedInClient(
+  app: TestApp['app'],
+  email: string,
+  password: string,
+): Promise<Client> {
   const client = await anonymousClient(app);
   const response = await client.post('/api/session', { email, password });
-  if (response.status !== 200) throw new Error(`sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
+  if (response.status !== 200)
+    throw new Error(
+      `sign-in as ${email} failed: ${response.status} ${JSON.stringify(response.body)}`,
+    );
   client.csrf = response.body.csrfToken;
   return client;
 }

@@ -3,7 +3,11 @@ import { TenantRepository } from '../../db/tenant-repository';
 import { simpleResourceRouter } from '../../http/simple-resource';
 import { isoOrNull } from '../../http/present';
 import { planners, staff } from '../../middleware/authorise';
-import { colonyLotCreateRequest, colonyLotListQuery, colonyLotUpdateRequest } from '../../../shared/schemas/colony-lots';
+import {
+  colonyLotCreateRequest,
+  colonyLotListQuery,
+  colonyLotUpdateRequest,
+} from '../../../shared/schemas/colony-lots';
 import { ColonyLot } from './colony-lot.entity';
 import { hiveSetups } from '../hive-setups/hive-setups.router';
 

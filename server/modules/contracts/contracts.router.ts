@@ -2,7 +2,11 @@ import type { DataSource } from 'typeorm';
 import { resourceRouter } from '../../http/resource-router';
 import { idParam } from '../../http/params';
 import { actorOf, allow, planners, staff } from '../../middleware/authorise';
-import { contractCreateRequest, contractListQuery, contractUpdateRequest } from '../../../shared/schemas/contracts';
+import {
+  contractCreateRequest,
+  contractListQuery,
+  contractUpdateRequest,
+} from '../../../shared/schemas/contracts';
 import { ContractsService } from './contracts.service';
 
 /** /api/contracts: staff read (crew without money), growers their own; owners and planners write. */

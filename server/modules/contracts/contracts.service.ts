@@ -4,7 +4,11 @@ import { TenantRepository } from '../../db/tenant-repository';
 import { AppError } from '../../errors/app-error';
 import { isoOrNull } from '../../http/present';
 import type { Actor } from '../../middleware/authorise';
-import type { ContractCreateRequest, ContractUpdateRequest, contractListQuery } from '../../../shared/schemas/contracts';
+import type {
+  ContractCreateRequest,
+  ContractUpdateRequest,
+  contractListQuery,
+} from '../../../shared/schemas/contracts';
 import { growers } from '../growers/growers.service';
 import { sites } from '../sites/sites.service';
 import { Contract } from './contract.entity';
@@ -17,7 +21,11 @@ export function presentContract(c: Contract, actor: Actor) {
   const money =
     actor.role === 'crew'
       ? {}
-      : { feePerColonyCents: c.feePerColonyCents, depositCents: c.depositCents, frameAdjustmentCents: c.frameAdjustmentCents };
+      : {
+          feePerColonyCents: c.feePerColonyCents,
+          depositCents: c.depositCents,
+          frameAdjustmentCents: c.frameAdjustmentCents,
+        };
   return {
     id: c.id,
     growerId: c.growerId,
@@ -45,21 +53,44 @@ export class ContractsService {
   constructor(private readonly db: DataSource) {}
 
   /** The grower and sites must be this operation's, and the sites that grower's (or ownerless). */
-  private async checkReferences(tx: EntityManager, actor: Actor, growerId: string, siteIds: string[]) {
+  private async checkReferences(
+    tx: EntityManager,
+    actor: Actor,
+    growerId: string,
+    siteIds: string[],
+  ) {
     await growers.get(tx, actor.operationId, growerId).catch(() => {
       throw AppError.validation([{ field: 'growerId', message: 'No such grower.' }]);
     });
     for (const [index, siteId] of siteIds.entries()) {
       const site = await sites.get(tx, actor.operationId, siteId).catch(() => null);
-      if (!site) throw AppError.validation([{ field: `siteIds.${index}`, message: 'No such site.' }]);
+      if (!site)
+        throw AppError.validation([{ field: `siteIds.${index}`, message: 'No such site.' }]);
       if (site.growerId && site.growerId !== growerId) {
-        throw AppError.validation([{ field: `siteIds.${index}`, message: 'This site belongs to another grower.' }]);
+        throw AppError.validation([
+          { field: `siteIds.${index}`, message: 'This site belongs to another grower.' },
+        ]);
       }
     }
   }
 
-  private record(tx: EntityManager, actor: Actor, contractId: string, kind: string, detail: Record<string, unknown> = {}) {
-    return tx.getRepository(ContractEvent).insert({ operationId: actor.operationId, contractId, kind, detail: detail as never, actorUserId: actor.id, occurredAt: new Date() });
+  private record(
+    tx: EntityManager,
+    actor: Actor,
+    contractId: string,
+    kind: string,
+    detail: Record<string, unknown> = {},
+  ) {
+    return tx
+      .getRepository(ContractEvent)
+      .insert({
+        operationId: actor.operationId,
+        contractId,
+        kind,
+        detail: detail as never,
+        actorUserId: actor.id,
+        occurredAt: new Date(),
+      });
   }
 
   async list(actor: Actor, query: z.infer<typeof contractListQuery>) {
@@ -75,7 +106,8 @@ export class ContractsService {
 
   async get(actor: Actor, id: string) {
     const contract = await contracts.get(this.db, actor.operationId, id);
-    if (actor.role === 'grower' && contract.growerId !== actor.growerId) throw AppError.notFound('Contract');
+    if (actor.role === 'grower' && contract.growerId !== actor.growerId)
+      throw AppError.notFound('Contract');
     return presentContract(contract, actor);
   }
 
@@ -86,7 +118,14 @@ export class ContractsService {
       where: { operationId: actor.operationId, contractId: id },
       order: { occurredAt: 'ASC' },
     });
-    return { items: events.map((e) => ({ id: e.id, kind: e.kind, detail: e.detail, occurredAt: e.occurredAt.toISOString() })) };
+    return {
+      items: events.map((e) => ({
+        id: e.id,
+        kind: e.kind,
+        detail: e.detail,
+        occurredAt: e.occurredAt.toISOString(),
+      })),
+    };
   }
 
   async create(actor: Actor, input: ContractCreateRequest) {
@@ -101,11 +140,27 @@ export class ContractsService {
   async update(actor: Actor, id: string, { version, ...changes }: ContractUpdateRequest) {
     return this.db.transaction(async (tx) => {
       const before = await contracts.get(tx, actor.operationId, id);
-      await this.checkReferences(tx, actor, changes.growerId ?? before.growerId, changes.siteIds ?? before.siteIds);
+      await this.checkReferences(
+        tx,
+        actor,
+        changes.growerId ?? before.growerId,
+        changes.siteIds ?? before.siteIds,
+      );
       const after = await contracts.update(tx, actor.operationId, id, version, changes);
-      const changed = Object.keys(changes).filter((k) => JSON.stringify(before[k as keyof Contract]) !== JSON.stringify(after[k as keyof Contract]));
-      if (before.status !== after.status) await this.record(tx, actor, id, 'status-changed', { from: before.status, to: after.status });
-      if (changed.some((k) => k !== 'status')) await this.record(tx, actor, id, 'edited', { fields: changed.filter((k) => k !== 'status') });
+      const changed = Object.keys(changes).filter(
+        (k) =>
+          JSON.stringify(before[k as keyof Contract]) !==
+          JSON.stringify(after[k as keyof Contract]),
+      );
+      if (before.status !== after.status)
+        await this.record(tx, actor, id, 'status-changed', {
+          from: before.status,
+          to: after.status,
+        });
+      if (changed.some((k) => k !== 'status'))
+        await this.record(tx, actor, id, 'edited', {
+          fields: changed.filter((k) => k !== 'status'),
+        });
       return presentContract(after, actor);
     });
   }

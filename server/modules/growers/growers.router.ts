@@ -1,7 +1,11 @@
 import type { DataSource } from 'typeorm';
 import { resourceRouter } from '../../http/resource-router';
 import { planners, staff } from '../../middleware/authorise';
-import { growerCreateRequest, growerListQuery, growerUpdateRequest } from '../../../shared/schemas/growers';
+import {
+  growerCreateRequest,
+  growerListQuery,
+  growerUpdateRequest,
+} from '../../../shared/schemas/growers';
 import { GrowersService } from './growers.service';
 
 /** /api/growers: staff read all; a grower reads only their own; owners and planners write. */

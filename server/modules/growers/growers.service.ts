@@ -36,16 +36,24 @@ export class GrowersService {
     return db
       .getRepository(GrowerContact)
       .createQueryBuilder('c')
-      .where('c.operationId = :operationId AND c.growerId IN (:...growerIds)', { operationId, growerIds })
+      .where('c.operationId = :operationId AND c.growerId IN (:...growerIds)', {
+        operationId,
+        growerIds,
+      })
       .getMany();
   }
 
   async list(actor: Actor, query: z.infer<typeof growerListQuery>) {
     const page = await growers.list(this.db, actor.operationId, query, (qb) => {
       if (actor.role === 'grower') qb.andWhere('record.id = :own', { own: actor.growerId });
-      if (query.q) qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
+      if (query.q)
+        qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
     });
-    const contacts = await this.contactsOf(this.db, actor.operationId, page.items.map((g) => g.id));
+    const contacts = await this.contactsOf(
+      this.db,
+      actor.operationId,
+      page.items.map((g) => g.id),
+    );
     return { items: page.items.map((g) => present(g, contacts, actor)), total: page.total };
   }
 
@@ -63,7 +71,11 @@ export class GrowersService {
     });
   }
 
-  async update(actor: Actor, id: string, { version, contacts, ...fields }: z.infer<typeof growerUpdateRequest>) {
+  async update(
+    actor: Actor,
+    id: string,
+    { version, contacts, ...fields }: z.infer<typeof growerUpdateRequest>,
+  ) {
     return this.db.transaction(async (tx) => {
       const grower = await growers.update(tx, actor.operationId, id, version, fields);
       if (contacts) await this.replaceContacts(tx, actor.operationId, id, contacts);
@@ -72,12 +84,19 @@ export class GrowersService {
   }
 
   async archive(actor: Actor, id: string, version: number) {
-    const grower = await this.db.transaction((tx) => growers.archive(tx, actor.operationId, id, version));
+    const grower = await this.db.transaction((tx) =>
+      growers.archive(tx, actor.operationId, id, version),
+    );
     return present(grower, await this.contactsOf(this.db, actor.operationId, [id]), actor);
   }
 
   /** Contacts are edited as a list: the list sent replaces the old one. */
-  private async replaceContacts(tx: EntityManager, operationId: string, growerId: string, contacts: GrowerContactInput[]) {
+  private async replaceContacts(
+    tx: EntityManager,
+    operationId: string,
+    growerId: string,
+    contacts: GrowerContactInput[],
+  ) {
     await tx.getRepository(GrowerContact).delete({ operationId, growerId });
     if (contacts.length === 0) return;
     await tx.getRepository(GrowerContact).insert(

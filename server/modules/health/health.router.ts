@@ -9,7 +9,10 @@ export function healthRouter(db: DataSource) {
       await db.query('SELECT 1');
       res.set('Cache-Control', 'no-store').json({ status: 'ok', db: 'up' });
     } catch {
-      res.status(503).set({ 'Retry-After': '5', 'Cache-Control': 'no-store' }).json({ status: 'unavailable', db: 'down' });
+      res
+        .status(503)
+        .set({ 'Retry-After': '5', 'Cache-Control': 'no-store' })
+        .json({ status: 'unavailable', db: 'down' });
     }
   });
   return router;

@@ -3,7 +3,11 @@ import { TenantRepository } from '../../db/tenant-repository';
 import { simpleResourceRouter } from '../../http/simple-resource';
 import { isoOrNull } from '../../http/present';
 import { planners, staff } from '../../middleware/authorise';
-import { hiveSetupCreateRequest, hiveSetupListQuery, hiveSetupUpdateRequest } from '../../../shared/schemas/hive-setups';
+import {
+  hiveSetupCreateRequest,
+  hiveSetupListQuery,
+  hiveSetupUpdateRequest,
+} from '../../../shared/schemas/hive-setups';
 import { HiveSetup } from './hive-setup.entity';
 
 export const hiveSetups = new TenantRepository(HiveSetup, 'Hive setup');
@@ -17,6 +21,12 @@ export function hiveSetupsRouter(db: DataSource) {
     listSchema: hiveSetupListQuery,
     readRoles: staff,
     writeRoles: planners,
-    present: (s) => ({ id: s.id, name: s.name, boxes: s.boxes, version: s.version, archivedAt: isoOrNull(s.archivedAt) }),
+    present: (s) => ({
+      id: s.id,
+      name: s.name,
+      boxes: s.boxes,
+      version: s.version,
+      archivedAt: isoOrNull(s.archivedAt),
+    }),
   });
 }

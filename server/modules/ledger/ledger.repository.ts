@@ -14,7 +14,12 @@ const flows = `
 /** Sums ledger entries into counts; the ledger is the only source of colony counts. */
 export class LedgerRepository {
   /** Colonies per place and lot on a date (entries dated that day included). */
-  async countsOn(db: Db, operationId: string, on: string, place?: { kind?: PlaceKind; id?: string }): Promise<ColonyCount[]> {
+  async countsOn(
+    db: Db,
+    operationId: string,
+    on: string,
+    place?: { kind?: PlaceKind; id?: string },
+  ): Promise<ColonyCount[]> {
     const rows: Array<Record<string, string | number>> = await db.query(
       `SELECT f.place_kind, f.place_id, COALESCE(y.name, s.name) AS place_name, f.lot_id, l.name AS lot_name,
               l.hive_setup_id, h.name AS hive_setup_name, SUM(f.delta)::int AS colonies
@@ -47,7 +52,13 @@ export class LedgerRepository {
    * The fewest colonies of a lot at a place on `from` or any later date that has entries: what
    * can leave on `from` without making a later count negative.
    */
-  async lowestBalanceFrom(db: Db, operationId: string, lotId: string, place: { kind: PlaceKind; id: string }, from: string): Promise<number> {
+  async lowestBalanceFrom(
+    db: Db,
+    operationId: string,
+    lotId: string,
+    place: { kind: PlaceKind; id: string },
+    from: string,
+  ): Promise<number> {
     const [row]: Array<{ lowest: number | null }> = await db.query(
       `WITH moves AS (
          SELECT occurred_on,
@@ -63,13 +74,23 @@ export class LedgerRepository {
 
   /** Serialises ledger writes for one lot of one operation until the transaction ends. */
   async lockLot(db: EntityManager, operationId: string, lotId: string): Promise<void> {
-    await db.query(`SELECT pg_advisory_xact_lock(hashtextextended($1 || ':' || $2, 0))`, [operationId, lotId]);
+    await db.query(`SELECT pg_advisory_xact_lock(hashtextextended($1 || ':' || $2, 0))`, [
+      operationId,
+      lotId,
+    ]);
   }
 
   /** True when the place exists in the operation. */
-  async placeExists(db: Db, operationId: string, place: { kind: PlaceKind; id: string }): Promise<boolean> {
+  async placeExists(
+    db: Db,
+    operationId: string,
+    place: { kind: PlaceKind; id: string },
+  ): Promise<boolean> {
     const table = place.kind === 'yard' ? 'yards' : 'sites';
-    const rows = await db.query(`SELECT 1 FROM ${table} WHERE operation_id = $1 AND id = $2`, [operationId, place.id]);
+    const rows = await db.query(`SELECT 1 FROM ${table} WHERE operation_id = $1 AND id = $2`, [
+      operationId,
+      place.id,
+    ]);
     return rows.length === 1;
   }
 }

@@ -3,7 +3,12 @@ import { format } from 'date-fns';
 import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
-import type { ColonyCount, LedgerEntryCreateRequest, ledgerListQuery, Place } from '../../../shared/schemas/ledger';
+import type {
+  ColonyCount,
+  LedgerEntryCreateRequest,
+  ledgerListQuery,
+  Place,
+} from '../../../shared/schemas/ledger';
 import { TenantRepository } from '../../db/tenant-repository';
 import { ColonyLot } from '../colony-lots/colony-lot.entity';
 import { LedgerEntry } from './ledger-entry.entity';
@@ -33,20 +38,31 @@ export class LedgerService {
       qb.andWhere('(entry.fromId = :placeId OR entry.toId = :placeId)', { placeId: query.placeId });
     }
     if (query.placeKind) {
-      qb.andWhere('(entry.fromKind = :placeKind OR entry.toKind = :placeKind)', { placeKind: query.placeKind });
+      qb.andWhere('(entry.fromKind = :placeKind OR entry.toKind = :placeKind)', {
+        placeKind: query.placeKind,
+      });
     }
-    qb.orderBy('entry.occurredOn', 'DESC').addOrderBy('entry.createdAt', 'DESC').take(query.limit).skip(query.offset);
+    qb.orderBy('entry.occurredOn', 'DESC')
+      .addOrderBy('entry.createdAt', 'DESC')
+      .take(query.limit)
+      .skip(query.offset);
     const [items, total] = await qb.getManyAndCount();
     return { items: items.map(presentEntry), total };
   }
 
   async get(actor: Actor, id: string) {
-    const entry = await this.db.getRepository(LedgerEntry).findOneBy({ id, operationId: actor.operationId });
+    const entry = await this.db
+      .getRepository(LedgerEntry)
+      .findOneBy({ id, operationId: actor.operationId });
     if (!entry) throw AppError.notFound('Ledger entry');
     return presentEntry(entry);
   }
 
-  counts(actor: Actor, on = today(), place?: { kind?: Place['kind']; id?: string }): Promise<ColonyCount[]> {
+  counts(
+    actor: Actor,
+    on = today(),
+    place?: { kind?: Place['kind']; id?: string },
+  ): Promise<ColonyCount[]> {
     return this.repository.countsOn(this.db, actor.operationId, on, place);
   }
 
@@ -59,7 +75,11 @@ export class LedgerService {
    * Appends an entry inside the caller's transaction, after checking the places and that no count
    * goes below zero on that date or after. Moves and placements call this too.
    */
-  async record(tx: EntityManager, actor: Actor, input: LedgerEntryCreateRequest & { moveId?: string }): Promise<LedgerEntry> {
+  async record(
+    tx: EntityManager,
+    actor: Actor,
+    input: LedgerEntryCreateRequest & { moveId?: string },
+  ): Promise<LedgerEntry> {
     await lots.get(tx, actor.operationId, input.lotId).catch(() => {
       throw AppError.validation([{ field: 'lotId', message: 'No such colony lot.' }]);
     });
@@ -71,11 +91,22 @@ export class LedgerService {
     }
     await this.repository.lockLot(tx, actor.operationId, input.lotId);
     if (input.from) {
-      const available = await this.repository.lowestBalanceFrom(tx, actor.operationId, input.lotId, input.from, input.occurredOn);
+      const available = await this.repository.lowestBalanceFrom(
+        tx,
+        actor.operationId,
+        input.lotId,
+        input.from,
+        input.occurredOn,
+      );
       if (available < input.colonies) {
-        throw new AppError(409, 'conflict', `Only ${available} colonies of this lot are there on ${input.occurredOn} (or later); ${input.colonies} cannot leave.`, {
-          available,
-        });
+        throw new AppError(
+          409,
+          'conflict',
+          `Only ${available} colonies of this lot are there on ${input.occurredOn} (or later); ${input.colonies} cannot leave.`,
+          {
+            available,
+          },
+        );
       }
     }
     const saved = await tx.getRepository(LedgerEntry).save(

@@ -7,11 +7,19 @@ export const promisingStatuses = ['planned', 'loading', 'rolling'] as const;
 export class MovesRepository {
   /** Serialises promise checks within one operation until the transaction ends. */
   async lockPromises(tx: EntityManager, operationId: string) {
-    await tx.query(`SELECT pg_advisory_xact_lock(hashtextextended('promises:' || $1, 0))`, [operationId]);
+    await tx.query(`SELECT pg_advisory_xact_lock(hashtextextended('promises:' || $1, 0))`, [
+      operationId,
+    ]);
   }
 
   /** Colonies of a lot at a yard that other open moves already take. */
-  async promisedElsewhere(tx: EntityManager, operationId: string, yardId: string, lotId: string, exceptMoveId: string | null): Promise<number> {
+  async promisedElsewhere(
+    tx: EntityManager,
+    operationId: string,
+    yardId: string,
+    lotId: string,
+    exceptMoveId: string | null,
+  ): Promise<number> {
     const [row]: Array<{ promised: number }> = await tx.query(
       `SELECT COALESCE(SUM(o.colonies), 0)::int AS promised
          FROM move_origins o JOIN moves m ON m.id = o.move_id

@@ -3,7 +3,12 @@ import { parseOrThrow } from '../../errors/validate';
 import { resourceRouter } from '../../http/resource-router';
 import { idParam } from '../../http/params';
 import { actorOf, allow, planners, staff } from '../../middleware/authorise';
-import { moveCreateRequest, moveListQuery, moveStatusRequest, moveUpdateRequest } from '../../../shared/schemas/moves';
+import {
+  moveCreateRequest,
+  moveListQuery,
+  moveStatusRequest,
+  moveUpdateRequest,
+} from '../../../shared/schemas/moves';
 import { MovesService } from './moves.service';
 
 /** /api/moves: staff read; owners and planners plan; crew mark loading, rolling, placed. */

@@ -38,8 +38,15 @@ export class MovesService {
 
   private async present(db: DataSource | EntityManager, move: Move) {
     const [origins, loads] = await Promise.all([
-      db.getRepository(MoveOrigin).find({ where: { operationId: move.operationId, moveId: move.id }, order: { pickupOrder: 'ASC' } }),
-      db.getRepository(MoveLoad).find({ where: { operationId: move.operationId, moveId: move.id } }),
+      db
+        .getRepository(MoveOrigin)
+        .find({
+          where: { operationId: move.operationId, moveId: move.id },
+          order: { pickupOrder: 'ASC' },
+        }),
+      db
+        .getRepository(MoveLoad)
+        .find({ where: { operationId: move.operationId, moveId: move.id } }),
     ]);
     return {
       id: move.id,
@@ -54,7 +61,12 @@ export class MovesService {
       averageSpeedKmh: move.averageSpeedKmh,
       timeline: move.timeline,
       notes: move.notes,
-      origins: origins.map((o) => ({ yardId: o.yardId, lotId: o.lotId, colonies: o.colonies, pickupOrder: o.pickupOrder })),
+      origins: origins.map((o) => ({
+        yardId: o.yardId,
+        lotId: o.lotId,
+        colonies: o.colonies,
+        pickupOrder: o.pickupOrder,
+      })),
       loads: loads.map((l) => ({
         id: l.id,
         truckId: l.truckId,
@@ -72,13 +84,20 @@ export class MovesService {
     };
   }
 
-  private async checkReferences(tx: EntityManager, actor: Actor, input: Partial<MoveCreateRequest>, kind: Move['destinationKind']) {
+  private async checkReferences(
+    tx: EntityManager,
+    actor: Actor,
+    input: Partial<MoveCreateRequest>,
+    kind: Move['destinationKind'],
+  ) {
     const fail = (field: string, message: string) => AppError.validation([{ field, message }]);
     for (const [i, destinationId] of (input.destinationIds ?? []).entries()) {
-      if (!(await ledger.placeExists(tx, actor.operationId, { kind, id: destinationId }))) throw fail(`destinationIds.${i}`, `No such ${kind}.`);
+      if (!(await ledger.placeExists(tx, actor.operationId, { kind, id: destinationId })))
+        throw fail(`destinationIds.${i}`, `No such ${kind}.`);
     }
     for (const [i, origin] of (input.origins ?? []).entries()) {
-      if (!(await ledger.placeExists(tx, actor.operationId, { kind: 'yard', id: origin.yardId }))) throw fail(`origins.${i}.yardId`, 'No such yard.');
+      if (!(await ledger.placeExists(tx, actor.operationId, { kind: 'yard', id: origin.yardId })))
+        throw fail(`origins.${i}.yardId`, 'No such yard.');
       await colonyLots.get(tx, actor.operationId, origin.lotId).catch(() => {
         throw fail(`origins.${i}.lotId`, 'No such colony lot.');
       });
@@ -96,7 +115,13 @@ export class MovesService {
   }
 
   /** Refuses to promise colonies that are not there or that another open move already takes. */
-  private async checkPromises(tx: EntityManager, actor: Actor, moveId: string, nightOf: string, origins: OriginInput[]) {
+  private async checkPromises(
+    tx: EntityManager,
+    actor: Actor,
+    moveId: string,
+    nightOf: string,
+    origins: OriginInput[],
+  ) {
     await promises.lockPromises(tx, actor.operationId);
     const wanted = new Map<string, OriginInput>();
     for (const o of origins) {
@@ -104,8 +129,20 @@ export class MovesService {
       wanted.set(key, { ...o, colonies: (wanted.get(key)?.colonies ?? 0) + o.colonies });
     }
     for (const o of wanted.values()) {
-      const there = await ledger.lowestBalanceFrom(tx, actor.operationId, o.lotId, { kind: 'yard', id: o.yardId }, nightOf);
-      const promised = await promises.promisedElsewhere(tx, actor.operationId, o.yardId, o.lotId, moveId);
+      const there = await ledger.lowestBalanceFrom(
+        tx,
+        actor.operationId,
+        o.lotId,
+        { kind: 'yard', id: o.yardId },
+        nightOf,
+      );
+      const promised = await promises.promisedElsewhere(
+        tx,
+        actor.operationId,
+        o.yardId,
+        o.lotId,
+        moveId,
+      );
       if (there - promised < o.colonies) {
         throw new AppError(
           409,
@@ -117,28 +154,58 @@ export class MovesService {
     }
   }
 
-  private async replaceParts(tx: EntityManager, actor: Actor, moveId: string, input: Partial<MoveCreateRequest>) {
+  private async replaceParts(
+    tx: EntityManager,
+    actor: Actor,
+    moveId: string,
+    input: Partial<MoveCreateRequest>,
+  ) {
     if (input.origins) {
       await tx.getRepository(MoveOrigin).delete({ operationId: actor.operationId, moveId });
-      await tx.getRepository(MoveOrigin).insert(input.origins.map((o, pickupOrder) => ({ ...o, operationId: actor.operationId, moveId, pickupOrder })));
+      await tx
+        .getRepository(MoveOrigin)
+        .insert(
+          input.origins.map((o, pickupOrder) => ({
+            ...o,
+            operationId: actor.operationId,
+            moveId,
+            pickupOrder,
+          })),
+        );
     }
     if (input.loads) {
       await tx.getRepository(MoveLoad).delete({ operationId: actor.operationId, moveId });
       if (input.loads.length) {
-        await tx.getRepository(MoveLoad).insert(
-          input.loads.map((l) => ({ operationId: actor.operationId, moveId, truckId: l.truckId, driverNames: l.driverNames ?? [], version: 1 })),
-        );
+        await tx
+          .getRepository(MoveLoad)
+          .insert(
+            input.loads.map((l) => ({
+              operationId: actor.operationId,
+              moveId,
+              truckId: l.truckId,
+              driverNames: l.driverNames ?? [],
+              version: 1,
+            })),
+          );
       }
     }
   }
 
   async list(actor: Actor, query: z.infer<typeof moveListQuery>) {
-    const page = await moves.list(this.db, actor.operationId, { ...query, sort: 'nightOf' }, (qb) => {
-      if (query.status) qb.andWhere('record.status = :status', { status: query.status });
-      if (query.from) qb.andWhere('record.nightOf >= :from', { from: query.from });
-      if (query.to) qb.andWhere('record.nightOf <= :to', { to: query.to });
-    });
-    return { items: await Promise.all(page.items.map((m) => this.present(this.db, m))), total: page.total };
+    const page = await moves.list(
+      this.db,
+      actor.operationId,
+      { ...query, sort: 'nightOf' },
+      (qb) => {
+        if (query.status) qb.andWhere('record.status = :status', { status: query.status });
+        if (query.from) qb.andWhere('record.nightOf >= :from', { from: query.from });
+        if (query.to) qb.andWhere('record.nightOf <= :to', { to: query.to });
+      },
+    );
+    return {
+      items: await Promise.all(page.items.map((m) => this.present(this.db, m))),
+      total: page.total,
+    };
   }
 
   async get(actor: Actor, id: string) {
@@ -154,16 +221,30 @@ export class MovesService {
     });
   }
 
-  async update(actor: Actor, id: string, { version, origins, loads, ...fields }: MoveUpdateRequest) {
+  async update(
+    actor: Actor,
+    id: string,
+    { version, origins, loads, ...fields }: MoveUpdateRequest,
+  ) {
     return this.db.transaction(async (tx) => {
       const before = await moves.get(tx, actor.operationId, id);
       if (!['draft', 'planned'].includes(before.status)) {
-        throw new AppError(409, 'conflict', `A move that is ${before.status} can no longer be edited.`);
+        throw new AppError(
+          409,
+          'conflict',
+          `A move that is ${before.status} can no longer be edited.`,
+        );
       }
-      await this.checkReferences(tx, actor, { ...fields, origins, loads }, fields.destinationKind ?? before.destinationKind);
+      await this.checkReferences(
+        tx,
+        actor,
+        { ...fields, origins, loads },
+        fields.destinationKind ?? before.destinationKind,
+      );
       const after = await moves.update(tx, actor.operationId, id, version, fields);
       await this.replaceParts(tx, actor, id, { origins, loads });
-      if (before.status === 'planned') await this.checkPromises(tx, actor, id, after.nightOf, await this.originsOf(tx, actor, id));
+      if (before.status === 'planned')
+        await this.checkPromises(tx, actor, id, after.nightOf, await this.originsOf(tx, actor, id));
       return this.present(tx, after);
     });
   }
@@ -190,10 +271,16 @@ export class MovesService {
     return this.db.transaction(async (tx) => {
       const move = await moves.get(tx, actor.operationId, id);
       if (!moveTransitions[move.status].includes(status)) {
-        throw new AppError(409, 'conflict', `A move that is ${move.status} cannot become ${status}.`);
+        throw new AppError(
+          409,
+          'conflict',
+          `A move that is ${move.status} cannot become ${status}.`,
+        );
       }
       if (actor.role === 'crew' && !['loading', 'rolling', 'placed'].includes(status)) {
-        throw AppError.forbidden('Crew mark moves loading, rolling and placed; planners do the rest.');
+        throw AppError.forbidden(
+          'Crew mark moves loading, rolling and placed; planners do the rest.',
+        );
       }
       const origins = await this.originsOf(tx, actor, id);
       if (status === 'planned') await this.checkPromises(tx, actor, id, move.nightOf, origins);

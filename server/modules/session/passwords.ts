@@ -1,7 +1,12 @@
 import argon2 from 'argon2';
 
 // OWASP's argon2id baseline: 19 MiB memory, 2 iterations, 1 lane (SECURITY.md).
-const options = { type: argon2.argon2id, memoryCost: 19 * 1024, timeCost: 2, parallelism: 1 } as const;
+const options = {
+  type: argon2.argon2id,
+  memoryCost: 19 * 1024,
+  timeCost: 2,
+  parallelism: 1,
+} as const;
 
 /** Hashes a password with argon2id. */
 export function hashPassword(password: string): Promise<string> {

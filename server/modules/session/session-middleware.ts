@@ -41,31 +41,45 @@ export function createSessionLayer(db: DataSource, env: Env) {
   const sessionMiddleware = session({
     name: secure ? '__Host-duskhaul' : 'duskhaul.sid',
     secret: env.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: new PgStore({
+      pool,
+      tableName: 'sessions',
+      createTableIfMissing: false,
+      pruneSessionInterval: 15 * 60,
+    }),
     resave: false,
     saveUninitialized: false,
     rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure, path: '/', maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure,
+      path: '/',
+      maxAge: env.SESSION_IDLE_MINUTES * 60_000,
+    },
   });
 
   passport.use(
-    new LocalStrategy({ usernameField: 'email', passReqToCallback: true }, async (req, email, password, done) => {
-      try {
-        const address = req.ip ?? 'unknown';
-        await throttle.check(email, address);
-        const found = await users.findForSignIn(email);
-        const ok = await verifyPassword(found?.passwordHash ?? null, password);
-        if (!found || !ok || !found.active) {
-          await throttle.recordFailure(email, address);
-          // Unknown e-mail, wrong password and deactivated account get the same answer.
-          return done(null, false, { message: 'Wrong e-mail or password.' });
+    new LocalStrategy(
+      { usernameField: 'email', passReqToCallback: true },
+      async (req, email, password, done) => {
+        try {
+          const address = req.ip ?? 'unknown';
+          await throttle.check(email, address);
+          const found = await users.findForSignIn(email);
+          const ok = await verifyPassword(found?.passwordHash ?? null, password);
+          if (!found || !ok || !found.active) {
+            await throttle.recordFailure(email, address);
+            // Unknown e-mail, wrong password and deactivated account get the same answer.
+            return done(null, false, { message: 'Wrong e-mail or password.' });
+          }
+          await throttle.recordSuccess(email, address);
+          return done(null, found.user);
+        } catch (error) {
+          return done(error);
         }
-        await throttle.recordSuccess(email, address);
-        return done(null, found.user);
-      } catch (error) {
-        return done(error);
-      }
-    }),
+      },
+    ),
   );
   passport.serializeUser((user, done) => done(null, (user as SessionUser).id));
   passport.deserializeUser((id: string, done) => {
@@ -76,7 +90,8 @@ export function createSessionLayer(db: DataSource, env: Env) {
   const absoluteTimeout: RequestHandler = (req, _res, next) => {
     const signedInAt = req.session?.signedInAt;
     if (signedInAt && Date.now() - signedInAt > env.SESSION_ABSOLUTE_HOURS * 3_600_000) {
-      req.session.destroy(() => next());
+      // A fresh, empty session: the old one is gone from the store.
+      req.session.regenerate((error) => next(error));
       return;
     }
     next();
@@ -86,7 +101,12 @@ export function createSessionLayer(db: DataSource, env: Env) {
 
   return {
     users,
-    middleware: [sessionMiddleware, absoluteTimeout, passport.initialize(), passport.session()] as RequestHandler[],
+    middleware: [
+      sessionMiddleware,
+      absoluteTimeout,
+      passport.initialize(),
+      passport.session(),
+    ] as RequestHandler[],
     csrfProtection: csrf.csrfSynchronisedProtection,
     generateCsrfToken: csrf.generateToken,
   };

@@ -34,9 +34,19 @@ export class SessionUsers {
   constructor(private readonly db: DataSource) {}
 
   /** The user with this e-mail and their hash, or null. */
-  async findForSignIn(email: string): Promise<{ user: SessionUser; passwordHash: string; active: boolean } | null> {
-    const rows: UserRow[] = await this.db.query(`${select} WHERE lower(u.email) = lower($1)`, [email]);
-    return rows[0] ? { user: toSessionUser(rows[0]), passwordHash: rows[0].password_hash, active: rows[0].active } : null;
+  async findForSignIn(
+    email: string,
+  ): Promise<{ user: SessionUser; passwordHash: string; active: boolean } | null> {
+    const rows: UserRow[] = await this.db.query(`${select} WHERE lower(u.email) = lower($1)`, [
+      email,
+    ]);
+    return rows[0]
+      ? {
+          user: toSessionUser(rows[0]),
+          passwordHash: rows[0].password_hash,
+          active: rows[0].active,
+        }
+      : null;
   }
 
   /** The active user with this id, or null (a deactivated user's session no longer signs them in). */

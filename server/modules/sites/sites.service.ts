@@ -6,14 +6,19 @@ import { TenantRepository } from '../../db/tenant-repository';
 import { AppError } from '../../errors/app-error';
 import { isoOrNull } from '../../http/present';
 import type { Actor } from '../../middleware/authorise';
-import type { SiteCreateRequest, SiteUpdateRequest, siteListQuery } from '../../../shared/schemas/sites';
+import type {
+  SiteCreateRequest,
+  SiteUpdateRequest,
+  siteListQuery,
+} from '../../../shared/schemas/sites';
 import { growers } from '../growers/growers.service';
 import { Site } from './site.entity';
 
 export const sites = new TenantRepository(Site, 'Site');
 
 function present(site: Site, actor: Actor) {
-  const internal = actor.role === 'grower' ? {} : { accessNotes: site.accessNotes, notes: site.notes };
+  const internal =
+    actor.role === 'grower' ? {} : { accessNotes: site.accessNotes, notes: site.notes };
   return {
     id: site.id,
     growerId: site.growerId,
@@ -56,14 +61,16 @@ export class SitesService {
       if (query.growerId) qb.andWhere('record.growerId = :growerId', { growerId: query.growerId });
       if (query.crop) qb.andWhere('record.crop = :crop', { crop: query.crop });
       if (query.kind) qb.andWhere('record.kind = :kind', { kind: query.kind });
-      if (query.q) qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
+      if (query.q)
+        qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
     });
     return { items: page.items.map((s) => present(s, actor)), total: page.total };
   }
 
   async get(actor: Actor, id: string) {
     const site = await sites.get(this.db, actor.operationId, id);
-    if (actor.role === 'grower' && site.growerId !== actor.growerId) throw AppError.notFound('Site');
+    if (actor.role === 'grower' && site.growerId !== actor.growerId)
+      throw AppError.notFound('Site');
     return present(site, actor);
   }
 
@@ -79,13 +86,23 @@ export class SitesService {
   async update(actor: Actor, id: string, { version, ...changes }: SiteUpdateRequest) {
     const site = await this.db.transaction(async (tx) => {
       await this.checkGrower(tx, actor, changes.growerId);
-      const derived = changes.boundary ? fromBoundary(changes.boundary) : changes.boundary === null ? { areaHa: null } : {};
-      return sites.update(tx, actor.operationId, id, version, { ...changes, ...derived } as Partial<Site>);
+      const derived = changes.boundary
+        ? fromBoundary(changes.boundary)
+        : changes.boundary === null
+          ? { areaHa: null }
+          : {};
+      return sites.update(tx, actor.operationId, id, version, {
+        ...changes,
+        ...derived,
+      } as Partial<Site>);
     });
     return present(site, actor);
   }
 
   async archive(actor: Actor, id: string, version: number) {
-    return present(await this.db.transaction((tx) => sites.archive(tx, actor.operationId, id, version)), actor);
+    return present(
+      await this.db.transaction((tx) => sites.archive(tx, actor.operationId, id, version)),
+      actor,
+    );
   }
 }

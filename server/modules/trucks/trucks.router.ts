@@ -3,7 +3,11 @@ import { TenantRepository } from '../../db/tenant-repository';
 import { simpleResourceRouter } from '../../http/simple-resource';
 import { isoOrNull } from '../../http/present';
 import { staff } from '../../middleware/authorise';
-import { truckCreateRequest, truckListQuery, truckUpdateRequest } from '../../../shared/schemas/trucks';
+import {
+  truckCreateRequest,
+  truckListQuery,
+  truckUpdateRequest,
+} from '../../../shared/schemas/trucks';
 import { Truck } from './truck.entity';
 
 export const trucks = new TenantRepository(Truck, 'Truck');

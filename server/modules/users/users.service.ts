@@ -2,7 +2,11 @@ import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
-import type { UserCreateRequest, UserUpdateRequest, userListQuery } from '../../../shared/schemas/users';
+import type {
+  UserCreateRequest,
+  UserUpdateRequest,
+  userListQuery,
+} from '../../../shared/schemas/users';
 import { growers } from '../growers/growers.service';
 import { hashPassword } from '../session/passwords';
 import { SessionUsers } from '../session/session-users';
@@ -39,9 +43,20 @@ export class UsersService {
     return user;
   }
 
-  private async checkGrower(tx: EntityManager, actor: Actor, role: string, growerId: string | null | undefined) {
-    if (role === 'grower' && !growerId) throw AppError.validation([{ field: 'growerId', message: 'A grower user belongs to a grower.' }]);
-    if (role !== 'grower' && growerId) throw AppError.validation([{ field: 'growerId', message: 'Only grower users belong to a grower.' }]);
+  private async checkGrower(
+    tx: EntityManager,
+    actor: Actor,
+    role: string,
+    growerId: string | null | undefined,
+  ) {
+    if (role === 'grower' && !growerId)
+      throw AppError.validation([
+        { field: 'growerId', message: 'A grower user belongs to a grower.' },
+      ]);
+    if (role !== 'grower' && growerId)
+      throw AppError.validation([
+        { field: 'growerId', message: 'Only grower users belong to a grower.' },
+      ]);
     if (growerId) {
       await growers.get(tx, actor.operationId, growerId).catch(() => {
         throw AppError.validation([{ field: 'growerId', message: 'No such grower.' }]);
@@ -50,9 +65,14 @@ export class UsersService {
   }
 
   async list(actor: Actor, query: z.infer<typeof userListQuery>) {
-    const qb = this.repo().createQueryBuilder('u').where('u.operationId = :op', { op: actor.operationId });
+    const qb = this.repo()
+      .createQueryBuilder('u')
+      .where('u.operationId = :op', { op: actor.operationId });
     if (query.role) qb.andWhere('u.role = :role', { role: query.role });
-    if (query.q) qb.andWhere('(u.name ILIKE :q OR u.email ILIKE :q)', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
+    if (query.q)
+      qb.andWhere('(u.name ILIKE :q OR u.email ILIKE :q)', {
+        q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%`,
+      });
     const [items, total] = await qb.orderBy('u.name').getManyAndCount();
     return { items: items.map(present), total };
   }
@@ -64,8 +84,13 @@ export class UsersService {
   async create(actor: Actor, input: UserCreateRequest) {
     return this.db.transaction(async (tx) => {
       await this.checkGrower(tx, actor, input.role, input.growerId);
-      const taken = await tx.query(`SELECT 1 FROM users WHERE lower(email) = lower($1)`, [input.email]);
-      if (taken.length) throw AppError.validation([{ field: 'email', message: 'This e-mail already has an account.' }]);
+      const taken = await tx.query(`SELECT 1 FROM users WHERE lower(email) = lower($1)`, [
+        input.email,
+      ]);
+      if (taken.length)
+        throw AppError.validation([
+          { field: 'email', message: 'This e-mail already has an account.' },
+        ]);
       const saved = await this.repo(tx).save(
         this.repo(tx).create({
           operationId: actor.operationId,
@@ -87,16 +112,39 @@ export class UsersService {
     const user = await this.db.transaction(async (tx) => {
       const before = await this.find(tx, actor, id);
       const role = changes.role ?? before.role;
-      const growerId = changes.growerId !== undefined ? changes.growerId : role === 'grower' ? before.growerId : null;
+      const growerId =
+        changes.growerId !== undefined
+          ? changes.growerId
+          : role === 'grower'
+            ? before.growerId
+            : null;
       await this.checkGrower(tx, actor, role, growerId);
-      if (id === actor.id && (changes.active === false || (changes.role && changes.role !== 'owner'))) {
-        throw AppError.validation([{ field: changes.active === false ? 'active' : 'role', message: 'You cannot deactivate or demote yourself.' }]);
+      if (
+        id === actor.id &&
+        (changes.active === false || (changes.role && changes.role !== 'owner'))
+      ) {
+        throw AppError.validation([
+          {
+            field: changes.active === false ? 'active' : 'role',
+            message: 'You cannot deactivate or demote yourself.',
+          },
+        ]);
       }
       const result = await tx
         .createQueryBuilder()
         .update(User)
-        .set({ name: changes.name, role, growerId, active: changes.active, version: () => 'version + 1' } as never)
-        .where('id = :id AND operation_id = :op AND version = :version', { id, op: actor.operationId, version })
+        .set({
+          name: changes.name,
+          role,
+          growerId,
+          active: changes.active,
+          version: () => 'version + 1',
+        } as never)
+        .where('id = :id AND operation_id = :op AND version = :version', {
+          id,
+          op: actor.operationId,
+          version,
+        })
         .execute();
       if (result.affected !== 1) throw AppError.staleVersion(before.version);
       const after = await this.find(tx, actor, id);

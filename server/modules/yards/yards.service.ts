@@ -3,7 +3,12 @@ import type { Actor } from '../../middleware/authorise';
 import { TenantRepository } from '../../db/tenant-repository';
 import { isoOrNull } from '../../http/present';
 import type { ColonyCount } from '../../../shared/schemas/ledger';
-import type { YardCreateRequest, YardListQuery, YardUpdateRequest, YardView } from '../../../shared/schemas/yards';
+import type {
+  YardCreateRequest,
+  YardListQuery,
+  YardUpdateRequest,
+  YardView,
+} from '../../../shared/schemas/yards';
 import { LedgerRepository } from '../ledger/ledger.repository';
 import { today } from '../ledger/ledger.service';
 import { Yard } from './yard.entity';
@@ -13,9 +18,16 @@ const ledger = new LedgerRepository();
 
 function present(yard: Yard, counts: ColonyCount[]): YardView {
   const here = counts.filter((c) => c.placeKind === 'yard' && c.placeId === yard.id);
-  const bySetup = new Map<string, { hiveSetupId: string; hiveSetupName: string; colonies: number }>();
+  const bySetup = new Map<
+    string,
+    { hiveSetupId: string; hiveSetupName: string; colonies: number }
+  >();
   for (const c of here) {
-    const entry = bySetup.get(c.hiveSetupId) ?? { hiveSetupId: c.hiveSetupId, hiveSetupName: c.hiveSetupName, colonies: 0 };
+    const entry = bySetup.get(c.hiveSetupId) ?? {
+      hiveSetupId: c.hiveSetupId,
+      hiveSetupName: c.hiveSetupName,
+      colonies: 0,
+    };
     entry.colonies += c.colonies;
     bySetup.set(c.hiveSetupId, entry);
   }
@@ -45,7 +57,8 @@ export class YardsService {
 
   async list(actor: Actor, query: YardListQuery) {
     const page = await yards.list(this.db, actor.operationId, query, (qb) => {
-      if (query.q) qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
+      if (query.q)
+        qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
     });
     const counts = await this.counts(actor);
     return { items: page.items.map((y) => present(y, counts)), total: page.total };
@@ -61,12 +74,16 @@ export class YardsService {
   }
 
   async update(actor: Actor, id: string, { version, ...changes }: YardUpdateRequest) {
-    const yard = await this.db.transaction((tx) => yards.update(tx, actor.operationId, id, version, changes));
+    const yard = await this.db.transaction((tx) =>
+      yards.update(tx, actor.operationId, id, version, changes),
+    );
     return present(yard, await this.counts(actor));
   }
 
   async archive(actor: Actor, id: string, version: number) {
-    const yard = await this.db.transaction((tx) => yards.archive(tx, actor.operationId, id, version));
+    const yard = await this.db.transaction((tx) =>
+      yards.archive(tx, actor.operationId, id, version),
+    );
     return present(yard, await this.counts(actor));
   }
 }
