@@ -4,16 +4,16 @@ import { AppError } from './app-error';
 
 /** Turns zod issues into the envelope's field list, naming each field by its path. */
 export function fieldIssues(error: z.ZodError): FieldIssue[] {
-  return error.issues.map((issue) => {
+  return error.issues.flatMap((issue) => {
     const path = issue.path.map(String);
-    // Unknown keys are reported by zod at the parent; name the keys themselves.
+    // Unknown keys are reported by zod at their parent; name each key itself.
     if (issue.code === 'unrecognized_keys') {
-      return {
-        field: [...path, ...issue.keys].join('.') || '(body)',
-        message: `Not accepted here: ${issue.keys.join(', ')}.`,
-      };
+      return issue.keys.map((key) => ({
+        field: [...path, key].join('.'),
+        message: 'Not accepted here.',
+      }));
     }
-    return { field: path.join('.') || '(body)', message: issue.message };
+    return [{ field: path.join('.') || '(body)', message: issue.message }];
   });
 }
 

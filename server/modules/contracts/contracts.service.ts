@@ -81,16 +81,14 @@ export class ContractsService {
     kind: string,
     detail: Record<string, unknown> = {},
   ) {
-    return tx
-      .getRepository(ContractEvent)
-      .insert({
-        operationId: actor.operationId,
-        contractId,
-        kind,
-        detail: detail as never,
-        actorUserId: actor.id,
-        occurredAt: new Date(),
-      });
+    return tx.getRepository(ContractEvent).insert({
+      operationId: actor.operationId,
+      contractId,
+      kind,
+      detail: detail as never,
+      actorUserId: actor.id,
+      occurredAt: new Date(),
+    });
   }
 
   async list(actor: Actor, query: z.infer<typeof contractListQuery>) {

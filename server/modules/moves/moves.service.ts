@@ -38,12 +38,10 @@ export class MovesService {
 
   private async present(db: DataSource | EntityManager, move: Move) {
     const [origins, loads] = await Promise.all([
-      db
-        .getRepository(MoveOrigin)
-        .find({
-          where: { operationId: move.operationId, moveId: move.id },
-          order: { pickupOrder: 'ASC' },
-        }),
+      db.getRepository(MoveOrigin).find({
+        where: { operationId: move.operationId, moveId: move.id },
+        order: { pickupOrder: 'ASC' },
+      }),
       db
         .getRepository(MoveLoad)
         .find({ where: { operationId: move.operationId, moveId: move.id } }),
@@ -162,31 +160,27 @@ export class MovesService {
   ) {
     if (input.origins) {
       await tx.getRepository(MoveOrigin).delete({ operationId: actor.operationId, moveId });
-      await tx
-        .getRepository(MoveOrigin)
-        .insert(
-          input.origins.map((o, pickupOrder) => ({
-            ...o,
-            operationId: actor.operationId,
-            moveId,
-            pickupOrder,
-          })),
-        );
+      await tx.getRepository(MoveOrigin).insert(
+        input.origins.map((o, pickupOrder) => ({
+          ...o,
+          operationId: actor.operationId,
+          moveId,
+          pickupOrder,
+        })),
+      );
     }
     if (input.loads) {
       await tx.getRepository(MoveLoad).delete({ operationId: actor.operationId, moveId });
       if (input.loads.length) {
-        await tx
-          .getRepository(MoveLoad)
-          .insert(
-            input.loads.map((l) => ({
-              operationId: actor.operationId,
-              moveId,
-              truckId: l.truckId,
-              driverNames: l.driverNames ?? [],
-              version: 1,
-            })),
-          );
+        await tx.getRepository(MoveLoad).insert(
+          input.loads.map((l) => ({
+            operationId: actor.operationId,
+            moveId,
+            truckId: l.truckId,
+            driverNames: l.driverNames ?? [],
+            version: 1,
+          })),
+        );
       }
     }
   }
