@@ -10,6 +10,7 @@ import { createSessionLayer } from './modules/session/session-middleware';
 import { sessionRouter } from './modules/session/session.router';
 import { healthRouter } from './modules/health/health.router';
 import { apiRouters } from './routes';
+import { osrmRoadDistance } from './modules/calc/routing-service';
 
 export interface AppOptions {
   db: DataSource;
@@ -57,7 +58,7 @@ export function createApp({ db, env, log }: AppOptions) {
   api.use(sessions.csrfProtection as RequestHandler);
   const mounted: Array<[string, express.Router]> = [
     ['/session', sessionRouter(db, sessions)],
-    ...apiRouters(db),
+    ...apiRouters(db, env.ROUTING_URL ? osrmRoadDistance(env.ROUTING_URL) : null),
   ];
   for (const [mount, router] of mounted) api.use(mount, router);
   // Every API route as "METHOD /api/path", for the authorization matrix test and docs.

@@ -10,9 +10,12 @@ import { hiveSetupsRouter } from './modules/hive-setups/hive-setups.router';
 import { colonyLotsRouter } from './modules/colony-lots/colony-lots.router';
 import { ledgerRouter } from './modules/ledger/ledger.router';
 import { usersRouter } from './modules/users/users.router';
+import { calcRouter } from './modules/calc/calc.router';
+import { cropsRouter } from './modules/calc/crops.router';
+import type { RoadDistance } from './modules/calc/routing-service';
 
 /** Every API resource and where it is mounted under /api. */
-export function apiRouters(db: DataSource): Array<[string, Router]> {
+export function apiRouters(db: DataSource, roads: RoadDistance | null): Array<[string, Router]> {
   return [
     ['/yards', yardsRouter(db)],
     ['/sites', sitesRouter(db)],
@@ -24,5 +27,7 @@ export function apiRouters(db: DataSource): Array<[string, Router]> {
     ['/colony-lots', colonyLotsRouter(db)],
     ['/ledger', ledgerRouter(db)],
     ['/users', usersRouter(db)],
+    ['/calc', calcRouter(roads)],
+    ['/crops', cropsRouter()],
   ];
 }

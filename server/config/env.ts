@@ -33,6 +33,9 @@ const envSchema = z.object({
   HTTPS: z.enum(['true', 'false']).default('false'),
   // Number of proxies in front of the app whose X-Forwarded-For to trust (0 = none).
   TRUST_PROXY_HOPS: z.coerce.number().int().min(0).default(0),
+  // An OSRM-compatible routing service (e.g. http://127.0.0.1:5000) for road distances in move
+  // timelines; without it, distance is the great circle × a road factor.
+  ROUTING_URL: z.string().url().optional(),
   // Folder of the built client; served when present.
   CLIENT_DIST: z.string().default('dist'),
 });

@@ -1,8 +1,9 @@
+import { BOX_SIZES, type BoxSize } from '../domain/hive-weight';
 import { z } from 'zod';
 import { includeArchived, name, pagination, version } from './common';
 
-export const boxSizes = ['deep', 'medium', 'shallow'] as const;
-export type BoxSize = (typeof boxSizes)[number];
+export const boxSizes = BOX_SIZES as readonly BoxSize[] as ['deep', 'medium', 'shallow'];
+export type { BoxSize };
 
 /** One box of a hive stack and how full of honey it is (0–1). */
 export const hiveBox = z.strictObject({

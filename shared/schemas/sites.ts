@@ -1,3 +1,4 @@
+import { CROP_KEYS, type CropKey } from '../domain/crops';
 import { z } from 'zod';
 import { polygon } from './geojson';
 import {
@@ -17,25 +18,8 @@ export const siteKinds = ['orchard', 'seed-field', 'honey'] as const;
 export type SiteKind = (typeof siteKinds)[number];
 
 /** Crop keys, lower-case English, as GET /api/crops lists them. */
-export const cropKeys = [
-  'almond',
-  'apple',
-  'pear',
-  'plum',
-  'cherry',
-  'blueberry',
-  'cranberry',
-  'cucumber',
-  'melon',
-  'watermelon',
-  'squash',
-  'canola',
-  'alfalfa-seed',
-  'sunflower',
-  'avocado',
-  'honey',
-] as const;
-export type CropKey = (typeof cropKeys)[number];
+export const cropKeys = CROP_KEYS;
+export type { CropKey };
 
 export const siteFields = z.strictObject({
   growerId: id.nullish(),

@@ -104,6 +104,11 @@ const matrix: Record<string, Row> = {
   'POST /api/users': [401, 201, 403, 403, 403, 403, 201, 401],
   'PATCH /api/users/:id': [401, 200, 403, 403, 403, 403, 404, 401],
   'POST /api/users/:id/archive': [401, 200, 403, 403, 403, 403, 404, 401],
+  'GET /api/crops': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/calc/hive-weight': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/calc/load-plan': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/calc/move-window': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/calc/site-plan': [401, 200, 200, 200, 403, 403, 200, 401],
   // Last: signing out ends every client's session.
   'DELETE /api/session': [204, 204, 204, 204, 204, 204, 204, 204],
 };
@@ -172,6 +177,25 @@ async function freshTarget(
   throw new Error(`no target for ${resource}`);
 }
 
+const calcBodies: Record<string, object> = {
+  '/hive-weight': { boxes: [{ size: 'deep', honeyFill: 0.5 }] },
+  '/load-plan': {
+    colonies: 96,
+    coloniesPerPallet: 4,
+    palletTareKg: 20,
+    hiveWeightKg: { mean: 50, sd: 5, samples: 10 },
+    trucks: [{ id: 'a', payloadKg: 20000, palletSpots: 24, tiers: 2 }],
+  },
+  '/move-window': {
+    origin: { lat: 28, lon: -97.9 },
+    destination: { lat: 29, lon: -98.5 },
+    date: '2027-01-20',
+    loadingMinutes: 90,
+    averageSpeedKmh: 80,
+  },
+  '/site-plan': { crop: 'almond', areaHa: 40, coloniesPerPallet: 4, palletsPerDrop: 4 },
+};
+
 /** A valid body for the route, read at call time (current versions). */
 async function bodyFor(
   db: DataSource,
@@ -196,6 +220,7 @@ async function bodyFor(
       password: 'wrong-password',
     };
   }
+  if (resource === 'calc') return calcBodies[tail];
   if (tail === '/archive') return { version: await version() };
   if (tail === '/status') return { version: await version(), status: 'planned' };
   const create: Record<string, object> = {

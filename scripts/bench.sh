@@ -1,0 +1,8 @@
+#!/usr/bin/env bash
+# `npm run bench`: speed figures (never part of `npm test`).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/deps.sh
+ensure_node_modules
+echo "== Calculations (bench/calc.bench.ts)"
+node --import tsx bench/calc.bench.ts
