@@ -6,6 +6,7 @@ cd "$(dirname "$0")/.."
 source scripts/lib/deps.sh
 source scripts/lib/postgres.sh
 source scripts/lib/services.sh
+source scripts/lib/session-secret.sh
 
 ensure_node_modules
 export PORT=${PORT:-3000}
@@ -14,27 +15,15 @@ mkdir -p .data
 SERVER_PID=
 cleanup() {
   trap - EXIT INT TERM
-  [ -n "$SERVER_PID" ] && kill "$SERVER_PID" 2>/dev/null && wait "$SERVER_PID" 2>/dev/null
+  if [ -n "$SERVER_PID" ]; then kill "$SERVER_PID" 2>/dev/null || true; wait "$SERVER_PID" 2>/dev/null || true; fi
   services_stop
   pg_stop
 }
 trap cleanup EXIT
 trap 'exit 130' INT TERM
 
-if [ -z "${DATABASE_URL:-}" ]; then
-  pg_install_if_missing
-  export PGPORT=${PGPORT:-54329}
-  data=$(pg_data_dir "$PWD/.data/postgres-$PGPORT" "/tmp/duskhaul-$(basename "$PWD")-postgres-$PGPORT")
-  pg_start "$data" "$PGPORT"
-  pg_create_database "$PGPORT" duskhaul
-  export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/duskhaul"
-fi
-
-# A stable session secret per checkout unless one is configured.
-if [ -z "${SESSION_SECRET:-}" ]; then
-  [ -f .data/session-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('hex'))" >.data/session-secret
-  export SESSION_SECRET=$(cat .data/session-secret)
-fi
+provision_app_database
+ensure_session_secret
 
 services_start
 node --import tsx scripts/migrate.ts

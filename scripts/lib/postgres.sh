@@ -46,7 +46,9 @@ pg_start() {
     pg_as_owner "$bin/initdb" -D "$data" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
   fi
   if pg_as_owner "$bin/pg_ctl" -D "$data" status >/dev/null 2>&1; then
-    pg_log "already running in $data"
+    # Someone else started it (another `npm start`, a developer): use it, leave it running.
+    pg_log "already running in $data; leaving it running on exit"
+    return 0
   elif ! pg_as_owner "$bin/pg_ctl" -D "$data" -l "$data/server.log" -w -t 60 \
     -o "-c listen_addresses=127.0.0.1 -p $port -k '' $extra" start >/dev/null; then
     pg_log "could not start; last lines of $data/server.log:"
@@ -74,4 +76,16 @@ pg_create_database() {
   "$(pg_bin)/psql" -h 127.0.0.1 -p "$port" -U postgres -d postgres -qtAc \
     "SELECT 1 FROM pg_database WHERE datname = '$name'" | grep -q 1 ||
     "$(pg_bin)/psql" -h 127.0.0.1 -p "$port" -U postgres -d postgres -qc "CREATE DATABASE \"$name\"" >/dev/null
+}
+
+# The private cluster `npm start` and `npm run dev` share, unless DATABASE_URL names another.
+provision_app_database() {
+  [ -n "${DATABASE_URL:-}" ] && return 0
+  pg_install_if_missing
+  export PGPORT=${PGPORT:-54329}
+  local data
+  data=$(pg_data_dir "$PWD/.data/postgres-$PGPORT" "/tmp/duskhaul-$(basename "$PWD")-postgres-$PGPORT")
+  pg_start "$data" "$PGPORT"
+  pg_create_database "$PGPORT" duskhaul
+  export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/duskhaul"
 }
