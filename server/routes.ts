@@ -10,6 +10,7 @@ import { hiveSetupsRouter } from './modules/hive-setups/hive-setups.router';
 import { colonyLotsRouter } from './modules/colony-lots/colony-lots.router';
 import { ledgerRouter } from './modules/ledger/ledger.router';
 import { usersRouter } from './modules/users/users.router';
+import { samplesRouters } from './modules/samples/samples.router';
 import { calcRouter } from './modules/calc/calc.router';
 import { cropsRouter } from './modules/calc/crops.router';
 import type { RoadDistance } from './modules/calc/routing-service';
@@ -27,6 +28,7 @@ export function apiRouters(db: DataSource, roads: RoadDistance | null): Array<[s
     ['/colony-lots', colonyLotsRouter(db)],
     ['/ledger', ledgerRouter(db)],
     ['/users', usersRouter(db)],
+    ...samplesRouters(db),
     ['/calc', calcRouter(roads)],
     ['/crops', cropsRouter()],
   ];

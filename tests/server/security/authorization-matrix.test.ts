@@ -104,6 +104,10 @@ const matrix: Record<string, Row> = {
   'POST /api/users': [401, 201, 403, 403, 403, 403, 201, 401],
   'PATCH /api/users/:id': [401, 200, 403, 403, 403, 403, 404, 401],
   'POST /api/users/:id/archive': [401, 200, 403, 403, 403, 403, 404, 401],
+  'GET /api/weight-samples': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/weight-samples': [401, 201, 201, 201, 403, 403, 400, 401],
+  'GET /api/strength-samples': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/strength-samples': [401, 201, 201, 201, 403, 403, 400, 401],
   'GET /api/crops': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/hive-weight': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/load-plan': [401, 200, 200, 200, 403, 403, 200, 401],
@@ -263,6 +267,13 @@ async function bodyFor(
       from: { kind: 'yard', id: w.yard },
       reason: 'dead-out',
     },
+    'weight-samples': { yardId: w.yard, sampledOn: '2026-11-02', weightsKg: [48.5, 52, 55.1] },
+    'strength-samples': {
+      placeKind: 'yard',
+      placeId: w.yard,
+      sampledOn: '2026-11-02',
+      frames: [7, 8, 9, 6],
+    },
     users: {
       email: `matrix-${Math.random().toString(36).slice(2)}@example.test`,
       name: 'New hand',
@@ -288,6 +299,8 @@ async function bodyFor(
 /** A fingerprint of every tenant record of the operation, to prove a denied write changed nothing. */
 async function snapshot(db: DataSource, operationId: string) {
   const tables = [
+    'weight_samples',
+    'strength_samples',
     'yards',
     'sites',
     'growers',
