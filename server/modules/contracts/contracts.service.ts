@@ -41,7 +41,8 @@ export function presentContract(c: Contract, actor: Actor) {
     deliveryEndOn: c.deliveryEndOn,
     removalOn: c.removalOn,
     sprayNoticeHours: c.sprayNoticeHours,
-    terms: c.terms,
+    // Written terms often quote prices, so crew do not get them either.
+    ...(actor.role === 'crew' ? {} : { terms: c.terms }),
     ...(actor.role === 'grower' ? {} : { internalNotes: c.internalNotes }),
     version: c.version,
     archivedAt: isoOrNull(c.archivedAt),

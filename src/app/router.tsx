@@ -1,0 +1,131 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type NonIndexRouteObject, type RouteObject } from 'react-router-dom';
+import { RouteError } from '@/components/errors/route-error';
+import { PageSkeleton } from '@/components/ui/skeleton';
+import { setUnauthenticatedHandler } from '@/lib/api-client';
+import { sessionKeys } from '@/lib/auth';
+import * as appRoot from './routes/app-root';
+import * as home from './routes/home';
+import { NotFoundRoute } from './routes/not-found';
+import * as signIn from './routes/sign-in';
+import * as yourContracts from './routes/your-contracts';
+import * as yards from './routes/yards/yards';
+import * as yard from './routes/yards/yard';
+import * as yardNew from './routes/yards/yard-new';
+import * as yardEdit from './routes/yards/yard-edit';
+import * as sites from './routes/sites/sites';
+import * as site from './routes/sites/site';
+import * as siteNew from './routes/sites/site-new';
+import * as siteEdit from './routes/sites/site-edit';
+import * as growers from './routes/growers/growers';
+import * as grower from './routes/growers/grower';
+import * as growerNew from './routes/growers/grower-new';
+import * as growerEdit from './routes/growers/grower-edit';
+import * as contracts from './routes/contracts/contracts';
+import * as contract from './routes/contracts/contract';
+import * as contractNew from './routes/contracts/contract-new';
+import * as contractEdit from './routes/contracts/contract-edit';
+import * as settingsLayout from './routes/settings/settings-layout';
+import * as settingsIndex from './routes/settings/settings-index';
+import * as settingsUnits from './routes/settings/units';
+import * as settingsFleet from './routes/settings/fleet';
+import * as settingsHiveSetups from './routes/settings/hive-setups';
+import * as settingsColonyLots from './routes/settings/colony-lots';
+import * as settingsPeople from './routes/settings/people';
+import * as settingsCrops from './routes/settings/crops';
+
+const errorElement = <RouteError />;
+
+/** Every URL of the app: one route module each, its loader filling the query cache first. */
+export function routes(queryClient: QueryClient): RouteObject[] {
+  const page = (
+    path: string,
+    loader: ((qc: QueryClient) => RouteObject['loader']) | null,
+    element: React.ReactNode,
+  ): NonIndexRouteObject => ({
+    path,
+    loader: loader ? loader(queryClient) : undefined,
+    element,
+    errorElement,
+  });
+  return [
+    {
+      ...page('/sign-in', signIn.loader, <signIn.SignInRoute />),
+      hydrateFallbackElement: <PageSkeleton />,
+    },
+    {
+      path: '/',
+      loader: appRoot.loader(queryClient),
+      element: <appRoot.AppRootRoute />,
+      errorElement,
+      hydrateFallbackElement: <PageSkeleton />,
+      children: [
+        {
+          errorElement,
+          children: [
+            { index: true, loader: home.loader(queryClient) },
+            page('yards', yards.loader, <yards.YardsRoute />),
+            page('yards/new', yardNew.loader, <yardNew.YardNewRoute />),
+            page('yards/:yardId', yard.loader, <yard.YardRoute />),
+            page('yards/:yardId/edit', yardEdit.loader, <yardEdit.YardEditRoute />),
+            page('sites', sites.loader, <sites.SitesRoute />),
+            page('sites/new', siteNew.loader, <siteNew.SiteNewRoute />),
+            page('sites/:siteId', site.loader, <site.SiteRoute />),
+            page('sites/:siteId/edit', siteEdit.loader, <siteEdit.SiteEditRoute />),
+            page('growers', growers.loader, <growers.GrowersRoute />),
+            page('growers/new', growerNew.loader, <growerNew.GrowerNewRoute />),
+            page('growers/:growerId', grower.loader, <grower.GrowerRoute />),
+            page('growers/:growerId/edit', growerEdit.loader, <growerEdit.GrowerEditRoute />),
+            page('contracts', contracts.loader, <contracts.ContractsRoute />),
+            page('contracts/new', contractNew.loader, <contractNew.ContractNewRoute />),
+            page('contracts/:contractId', contract.loader, <contract.ContractRoute />),
+            page(
+              'contracts/:contractId/edit',
+              contractEdit.loader,
+              <contractEdit.ContractEditRoute />,
+            ),
+            page('your-contracts', yourContracts.loader, <yourContracts.YourContractsRoute />),
+            {
+              ...page('settings', settingsLayout.loader, <settingsLayout.SettingsLayoutRoute />),
+              children: [
+                { index: true, loader: settingsIndex.loader, element: null },
+                { path: 'units', element: <settingsUnits.SettingsUnitsRoute />, errorElement },
+                page('fleet', settingsFleet.loader, <settingsFleet.SettingsFleetRoute />),
+                page(
+                  'hive-setups',
+                  settingsHiveSetups.loader,
+                  <settingsHiveSetups.SettingsHiveSetupsRoute />,
+                ),
+                page(
+                  'colony-lots',
+                  settingsColonyLots.loader,
+                  <settingsColonyLots.SettingsColonyLotsRoute />,
+                ),
+                page('people', settingsPeople.loader, <settingsPeople.SettingsPeopleRoute />),
+                page('crops', settingsCrops.loader, <settingsCrops.SettingsCropsRoute />),
+              ],
+            },
+            { path: '*', element: <NotFoundRoute /> },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+/** The browser router; an expired session returns to sign-in and then back here. */
+export function createRouter(queryClient: QueryClient) {
+  const router = createBrowserRouter(routes(queryClient));
+  setUnauthenticatedHandler(() => {
+    const { pathname, search } = router.state.location;
+    if (pathname === '/sign-in') return;
+    queryClient.setQueryData(sessionKeys.all, (old: { csrfToken?: string } | undefined) => ({
+      user: null,
+      csrfToken: old?.csrfToken ?? '',
+    }));
+    void router.navigate(`/sign-in?next=${encodeURIComponent(pathname + search)}`, {
+      replace: true,
+    });
+  });
+  return router;
+}

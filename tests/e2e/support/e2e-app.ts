@@ -1,0 +1,91 @@
+import 'reflect-metadata';
+import { randomBytes } from 'node:crypto';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import pg from 'pg';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { createApp } from '../../../server/app';
+import { loadEnv } from '../../../server/config/env';
+import { createDataSource } from '../../../server/db/data-source';
+import { seedDemo } from '../../../server/db/seed';
+
+export const demoPassword = 'duskhaul-demo';
+export const screenshotDir = path.resolve('test-output/screenshots');
+
+/**
+ * The built client and the API on a free port, over a database of its own holding the demo
+ * scenario, and a headless Debian Chromium that records every request it makes.
+ */
+export async function startE2e() {
+  const base = new URL(process.env.DATABASE_URL!);
+  const name = `duskhaul_e2e_${randomBytes(4).toString('hex')}`;
+  const admin = new pg.Client({ connectionString: base.toString() });
+  await admin.connect();
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.end();
+  const url = new URL(base.toString());
+  url.pathname = `/${name}`;
+
+  const db = createDataSource({ url: url.toString(), poolSize: 5 });
+  await db.initialize();
+  await db.runMigrations();
+  await seedDemo(db);
+  const env = loadEnv({ ...process.env, DATABASE_URL: url.toString(), NODE_ENV: 'test', CLIENT_DIST: 'dist' });
+  const server = createApp({ db, env, log: () => undefined }).listen(0, '127.0.0.1');
+  await new Promise((resolve) => server.once('listening', resolve));
+  const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+
+  const profile = mkdtempSync(path.join(tmpdir(), 'duskhaul-chromium-'));
+  const browser: BrowserContext = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  const requests: string[] = [];
+  browser.on('request', (request) => requests.push(request.url()));
+  mkdirSync(screenshotDir, { recursive: true });
+
+  return {
+    origin,
+    db,
+    browser,
+    /** Every URL the browser asked for, to prove nothing leaves the host. */
+    requests,
+    async newPage(viewport = { width: 1280, height: 860 }) {
+      const page = await browser.newPage();
+      await page.setViewportSize(viewport);
+      return page;
+    },
+    async close() {
+      await browser.close();
+      await new Promise((resolve) => server.close(resolve));
+      server.closeAllConnections();
+      await db.destroy();
+      rmSync(profile, { recursive: true, force: true });
+      const cleanup = new pg.Client({ connectionString: base.toString() });
+      await cleanup.connect();
+      await cleanup.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+      await cleanup.end();
+    },
+  };
+}
+
+export type E2e = Awaited<ReturnType<typeof startE2e>>;
+
+/** Signs in through the sign-in page as a person would. */
+export async function signIn(page: Page, origin: string, email: string, password = demoPassword) {
+  // One browser profile serves the whole file: start each sign-in signed out.
+  await page.context().clearCookies();
+  await page.goto(`${origin}/sign-in`);
+  await page.getByLabel(/e-?mail/i).fill(email);
+  await page.getByLabel(/password/i).fill(password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+}
+
+/** Saves a full-page screenshot under test-output/screenshots for reviewers. */
+export async function screenshot(page: Page, name: string) {
+  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
+}
