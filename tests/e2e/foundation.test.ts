@@ -12,12 +12,17 @@ describe('foundation in the browser', () => {
   it('when the planner signs in then the yards of the demo operation are listed', async () => {
     const page = await e2e.newPage();
     await signIn(page, e2e.origin, 'planner@demo.test');
-    await page.getByRole('link', { name: /^yards$/i }).first().click();
+    await page
+      .getByRole('link', { name: /^yards$/i })
+      .first()
+      .click();
     const table = page.getByRole('table');
     await table.waitFor();
     const rows = await table.getByRole('row').count();
     expect(rows).toBeGreaterThan(8); // header + the 8 demo yards
-    const [{ name }] = await e2e.db.query(`SELECT y.name FROM yards y JOIN operations o ON o.id = y.operation_id WHERE o.name = 'Mesquite Flats Apiaries' ORDER BY y.name LIMIT 1`);
+    const [{ name }] = await e2e.db.query(
+      `SELECT y.name FROM yards y JOIN operations o ON o.id = y.operation_id WHERE o.name = 'Mesquite Flats Apiaries' ORDER BY y.name LIMIT 1`,
+    );
     expect(await table.getByText(name).count()).toBeGreaterThan(0);
     await screenshot(page, 'foundation-planner-yards');
     await page.close();
@@ -26,9 +31,16 @@ describe('foundation in the browser', () => {
   it('when a grower signs in then only their own contracts are shown', async () => {
     const page = await e2e.newPage();
     await signIn(page, e2e.origin, 'grower@demo.test');
-    const [own] = await e2e.db.query(`SELECT g.id, g.name FROM users u JOIN growers g ON g.id = u.grower_id WHERE u.email = 'grower@demo.test'`);
-    const [other] = await e2e.db.query(`SELECT g.name FROM users u JOIN growers g ON g.id = u.grower_id WHERE u.email = 'grower2@demo.test'`);
-    const ownContracts = await e2e.db.query(`SELECT count(*)::int AS n FROM contracts WHERE grower_id = $1 AND archived_at IS NULL`, [own.id]);
+    const [own] = await e2e.db.query(
+      `SELECT g.id, g.name FROM users u JOIN growers g ON g.id = u.grower_id WHERE u.email = 'grower@demo.test'`,
+    );
+    const [other] = await e2e.db.query(
+      `SELECT g.name FROM users u JOIN growers g ON g.id = u.grower_id WHERE u.email = 'grower2@demo.test'`,
+    );
+    const ownContracts = await e2e.db.query(
+      `SELECT count(*)::int AS n FROM contracts WHERE grower_id = $1 AND archived_at IS NULL`,
+      [own.id],
+    );
     const list = page.locator('ul[aria-label="Your contracts"] > li');
     await list.first().waitFor();
     const body = await page.locator('main').innerText();
@@ -41,7 +53,9 @@ describe('foundation in the browser', () => {
   });
 
   it('when pages load then every request stays on the same origin', () => {
-    const foreign = e2e.requests.filter((url) => !url.startsWith(e2e.origin) && !url.startsWith('data:') && !url.startsWith('blob:'));
+    const foreign = e2e.requests.filter(
+      (url) => !url.startsWith(e2e.origin) && !url.startsWith('data:') && !url.startsWith('blob:'),
+    );
     expect(foreign).toEqual([]);
   });
 });

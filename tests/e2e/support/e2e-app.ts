@@ -32,7 +32,12 @@ export async function startE2e() {
   await db.initialize();
   await db.runMigrations();
   await seedDemo(db);
-  const env = loadEnv({ ...process.env, DATABASE_URL: url.toString(), NODE_ENV: 'test', CLIENT_DIST: 'dist' });
+  const env = loadEnv({
+    ...process.env,
+    DATABASE_URL: url.toString(),
+    NODE_ENV: 'test',
+    CLIENT_DIST: 'dist',
+  });
   const server = createApp({ db, env, log: () => undefined }).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
@@ -41,7 +46,15 @@ export async function startE2e() {
   const browser: BrowserContext = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const requests: string[] = [];
   browser.on('request', (request) => requests.push(request.url()));
