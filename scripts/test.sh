@@ -45,6 +45,7 @@ node --import tsx scripts/migrate.ts || exit 1
 echo "[test] type-check, lint and build…" >&2
 npx tsc --noEmit -p tsconfig.json || exit 1
 npx eslint . --max-warnings 0 || exit 1
+npx prettier --check . --log-level warn || exit 1
 npx vite build --logLevel warn || exit 1
 
 mkdir -p test-output
