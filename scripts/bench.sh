@@ -6,3 +6,7 @@ source scripts/lib/deps.sh
 ensure_node_modules
 echo "== Calculations (bench/calc.bench.ts)"
 node --import tsx bench/calc.bench.ts
+echo "== Move planning (bench/moves.bench.ts)"
+node --import tsx bench/moves.bench.ts
+echo "== Map tiles (bench/tiles.bench.ts)"
+node --import tsx bench/tiles.bench.ts

@@ -45,6 +45,8 @@ node --import tsx scripts/wait-for-health.ts "http://127.0.0.1:$PORT/api/health"
     grower2@demo.test   another grower of the same operation
     owner@second.test   owner of a separate operation (isolation)
 
+  E-mail outbox (fake SMTP): http://127.0.0.1:${FAKE_SMTP_HTTP_PORT:-1080}/
+
   Ctrl-C stops the app and its database; the data is kept in .data/.
 MSG
 wait "$SERVER_PID"

@@ -10,16 +10,23 @@ import { createSessionLayer } from './modules/session/session-middleware';
 import { sessionRouter } from './modules/session/session.router';
 import { healthRouter } from './modules/health/health.router';
 import { apiRouters } from './routes';
+import { tilesRouter } from './modules/tiles/tiles.router';
 import { osrmRoadDistance } from './modules/calc/routing-service';
+import { calendarFileRouter } from './modules/moves/calendar-feed';
+import { JobQueue } from './modules/jobs/job-queue';
+import { respondRouter } from './modules/proposals/respond.router';
+import { paymentsWebhookRouter } from './modules/payments/payments.router';
 
 export interface AppOptions {
   db: DataSource;
   env: Env;
   log?: (error: unknown) => void;
+  /** The job queue requests enqueue into (e-mail); a send-only one over `db` when not given. */
+  jobs?: JobQueue;
 }
 
 /** The Express app: security headers, sessions, CSRF, the API, the client build, errors. */
-export function createApp({ db, env, log }: AppOptions) {
+export function createApp({ db, env, log, jobs = new JobQueue(db, { log }) }: AppOptions) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', env.TRUST_PROXY_HOPS);
@@ -50,6 +57,11 @@ export function createApp({ db, env, log }: AppOptions) {
   );
 
   app.use('/api/health', healthRouter(db));
+  // The provider's signed events need the raw bytes: before the JSON parser, outside CSRF.
+  const paymentsWebhook = paymentsWebhookRouter({ db, env });
+  app.use('/api/payments', paymentsWebhook);
+  // E-mailed proposal links: public pages outside /api (no session, no CSRF; the token is the key).
+  app.use('/respond', respondRouter({ db, env, jobs, log }));
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb', strict: true }));
@@ -58,18 +70,25 @@ export function createApp({ db, env, log }: AppOptions) {
   api.use(sessions.csrfProtection as RequestHandler);
   const mounted: Array<[string, express.Router]> = [
     ['/session', sessionRouter(db, sessions)],
-    ...apiRouters(db, env.ROUTING_URL ? osrmRoadDistance(env.ROUTING_URL) : null),
+    ...apiRouters(db, env.ROUTING_URL ? osrmRoadDistance(env.ROUTING_URL) : null, { env, jobs }),
   ];
   for (const [mount, router] of mounted) api.use(mount, router);
   // Every API route as "METHOD /api/path", for the authorization matrix test and docs.
   app.locals.apiRoutes = [
     'GET /api/health',
+    ...routesOf('/api/payments', paymentsWebhook),
     ...mounted.flatMap(([mount, router]) => routesOf(`/api${mount}`, router)),
   ];
   api.use((req) => {
     throw new AppError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
   });
   app.use('/api', api);
+
+  // Secret per-user calendar feeds (no session: the token in the URL is the key).
+  app.use('/calendar', calendarFileRouter(db));
+
+  // Map tiles carry no tenant data: public, cacheable, outside the session and CSRF layers.
+  app.use('/tiles', tilesRouter({ mbtilesPath: env.MBTILES_PATH }));
 
   const dist = path.resolve(env.CLIENT_DIST);
   if (existsSync(path.join(dist, 'index.html'))) {

@@ -3,6 +3,8 @@ import type { Server } from 'node:http';
 import { loadEnv } from './config/env';
 import { createDataSource } from './db/data-source';
 import { createApp } from './app';
+import { JobQueue } from './modules/jobs/job-queue';
+import { startBackgroundWork } from './modules/jobs/background-work';
 
 /** Starts the server: configuration → database → listen; stops cleanly on SIGINT/SIGTERM. */
 async function main() {
@@ -13,12 +15,21 @@ async function main() {
     statementTimeoutMs: env.DATABASE_STATEMENT_TIMEOUT_MS,
   });
   await db.initialize();
-  const app = createApp({ db, env });
+  // This process also runs the job workers (e-mail); pg-boss shares the work among app servers.
+  const jobs = new JobQueue(db, { supervise: true, log: console.error });
+  const background = await startBackgroundWork({ db, env, jobs });
+  const app = createApp({ db, env, jobs });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     console.log(`[server] listening on http://${env.HOST}:${env.PORT}`);
   });
   const stop = () => {
-    server.close(() => void db.destroy().finally(() => process.exit(0)));
+    server.close(
+      () =>
+        void background
+          .stop()
+          .finally(() => db.destroy())
+          .finally(() => process.exit(0)),
+    );
     server.closeAllConnections();
     setTimeout(() => process.exit(0), 3_000).unref();
   };

@@ -68,3 +68,127 @@ export const moveListQuery = z.strictObject({
 
 export type MoveCreateRequest = z.infer<typeof moveCreateRequest>;
 export type MoveUpdateRequest = z.infer<typeof moveUpdateRequest>;
+
+// ---- Planning: preview and availability -------------------------------------------------------
+
+/**
+ * A plan preview takes a move's create body (name optional) and, when editing a saved move, its
+ * id so that move's own promises are not counted against it.
+ */
+export const movePreviewRequest = moveFields.extend({
+  name: name.optional(),
+  moveId: id.optional(),
+});
+export type MovePreviewRequest = z.infer<typeof movePreviewRequest>;
+
+/** `GET /api/moves/availability?nightOf=YYYY-MM-DD[&exceptMoveId=…]`. */
+export const moveAvailabilityQuery = z.strictObject({
+  nightOf: calendarDate,
+  exceptMoveId: id.optional(),
+});
+
+// ---- Crew recording ------------------------------------------------------------------------
+
+/** The crew lead's check before a load rolls; each item is ticked or not. */
+export const preRollCheck = z.strictObject({
+  netsClipped: z.boolean(),
+  strapsTight: z.boolean(),
+  palletsClean: z.boolean(),
+  waterAboard: z.boolean(),
+  certificateInCab: z.boolean(),
+  checkedAt: z.iso.datetime({ offset: true }).optional(),
+});
+export type PreRollCheck = z.infer<typeof preRollCheck>;
+
+/** Colonies set down at one drop of one site (or at the destination yard). */
+export const dropPlacement = z.strictObject({
+  placeId: id,
+  drop: text(40).optional(),
+  colonies: z.number().int().min(0).max(100_000),
+});
+
+const colonyCount = z.number().int('A whole number.').min(0).max(100_000);
+
+/** What the crew records on one truck's load; every field optional, the load's version required. */
+export const loadRecordFields = z.strictObject({
+  palletsLoaded: z.number().int('A whole number.').min(0).max(10_000).nullish(),
+  coloniesPlaced: colonyCount.nullish(),
+  coloniesLeftBehind: colonyCount.nullish(),
+  coloniesLost: colonyCount.nullish(),
+  placements: z.array(dropPlacement).max(200).nullish(),
+  preRollCheck: preRollCheck.nullish(),
+  notes: text(4000).optional(),
+});
+export const loadRecordRequest = loadRecordFields.extend({ version });
+export type LoadRecordRequest = z.infer<typeof loadRecordRequest>;
+
+/** Hive weights read off a scale while loading a move. */
+export const moveWeightsFields = z.strictObject({
+  yardId: id.nullish(),
+  lotId: id.nullish(),
+  sampledOn: calendarDate.optional(),
+  weightsKg: z
+    .array(
+      z.number().positive('A hive weighs more than 0.').max(250, 'A hive weighs at most 250 kg.'),
+    )
+    .min(1, 'Enter at least one weight.')
+    .max(500),
+  notes: text(2000).optional(),
+});
+
+/** A note the crew adds to a load (or to the move when no load is named). */
+export const moveNoteFields = z.strictObject({ text: text(2000).trim().min(1, 'Required.') });
+
+// ---- Offline sync --------------------------------------------------------------------------
+
+export const syncKinds = ['load-counts', 'status', 'weights', 'note'] as const;
+export type SyncKind = (typeof syncKinds)[number];
+
+/** An idempotency key: the client makes one per change (a UUID is a good choice). */
+export const idempotencyKey = z
+  .string()
+  .min(8, 'At least 8 characters.')
+  .max(100)
+  .regex(/^[A-Za-z0-9_.:-]+$/, 'Letters, digits, and _ . : - only.');
+
+/** The envelope of one queued change; its payload is checked by kind (moveSyncPayloads). */
+export const moveSyncChange = z.strictObject({
+  idempotencyKey,
+  kind: z.enum(syncKinds),
+  moveId: id,
+  loadId: id.optional(),
+  version: version.optional(),
+  payload: z.unknown(),
+});
+export type MoveSyncChange = z.infer<typeof moveSyncChange>;
+
+/** Payload schema of each kind of change. */
+export const moveSyncPayloads = {
+  'load-counts': loadRecordFields,
+  status: z.strictObject({ status: z.enum(moveStatuses) }),
+  weights: moveWeightsFields,
+  note: moveNoteFields,
+} as const;
+
+/** A batch of changes queued on a device while it had no signal. */
+export const moveSyncRequest = z.strictObject({
+  changes: z.array(z.unknown()).min(1, 'Send at least one change.').max(200),
+});
+
+/** What became of one change. */
+export const syncOutcomes = ['applied', 'duplicate', 'conflict', 'rejected', 'failed'] as const;
+export type SyncOutcome = (typeof syncOutcomes)[number];
+
+// ---- Season board ----------------------------------------------------------------------------
+
+/** `GET /api/season?from=YYYY-MM-DD&to=YYYY-MM-DD` (at most 60 weeks). */
+export const seasonBoardQuery = z
+  .strictObject({ from: calendarDate, to: calendarDate })
+  .refine((q) => q.from <= q.to, {
+    path: ['to'],
+    message: 'The period ends on or after it starts.',
+  })
+  .refine((q) => Date.parse(q.to) - Date.parse(q.from) <= 420 * 86_400_000, {
+    path: ['to'],
+    message: 'At most 60 weeks at a time.',
+  });

@@ -9,6 +9,7 @@ import * as home from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import * as signIn from './routes/sign-in';
 import * as yourContracts from './routes/your-contracts';
+import { atlasRoute } from './routes/atlas/atlas';
 import * as yards from './routes/yards/yards';
 import * as yard from './routes/yards/yard';
 import * as yardNew from './routes/yards/yard-new';
@@ -64,6 +65,7 @@ export function routes(queryClient: QueryClient): RouteObject[] {
           errorElement,
           children: [
             { index: true, loader: home.loader(queryClient) },
+            atlasRoute(queryClient),
             page('yards', yards.loader, <yards.YardsRoute />),
             page('yards/new', yardNew.loader, <yardNew.YardNewRoute />),
             page('yards/:yardId', yard.loader, <yard.YardRoute />),

@@ -2,6 +2,7 @@
 export const paths = {
   home: '/',
   signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  atlas: '/atlas',
   yards: '/yards',
   yardNew: '/yards/new',
   yard: (id: string) => `/yards/${id}`,

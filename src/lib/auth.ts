@@ -58,3 +58,7 @@ export function useSignOut() {
 
 /** True when the role may edit yards, sites, growers, contracts and the ledger. */
 export const canPlan = (user: SessionUser) => user.role === 'owner' || user.role === 'planner';
+
+/** True for the operation's own people (owner, planner, crew): they weigh hives and inspect colonies. */
+export const isStaff = (user: SessionUser) =>
+  user.role === 'owner' || user.role === 'planner' || user.role === 'crew';

@@ -7,5 +7,7 @@ export class Payment extends TenantRecord {
   @Column({ type: 'uuid' }) invoiceId: string;
   @Column({ type: 'integer' }) amountCents: number;
   @Column({ type: 'text' }) providerReference: string;
+  /** The hosted checkout session the money came through. */
+  @Column({ type: 'text', nullable: true }) providerSessionId: string | null;
   @Column({ type: 'timestamptz' }) receivedAt: Date;
 }

@@ -1,18 +1,31 @@
 import { Column, Entity } from 'typeorm';
 import { TenantRecord } from '../../db/base-columns';
 
+/** One colony count set down at one drop, as the crew records it. */
+export interface DropPlacementRecord {
+  placeId: string;
+  drop?: string;
+  colonies: number;
+}
+
 /** One truck's part of a move: planned and recorded counts. */
 @Entity('move_loads')
 export class MoveLoad extends TenantRecord {
   @Column({ type: 'uuid' }) moveId: string;
   @Column({ type: 'uuid' }) truckId: string;
+  /** Fill order of the trucks (the load plan fills them in this order). */
+  @Column({ type: 'integer' }) position: number;
   @Column({ type: 'text', array: true }) driverNames: string[];
   @Column({ type: 'integer' }) palletsPlanned: number;
   @Column({ type: 'integer' }) coloniesPlanned: number;
+  /** This truck's page of the computed plan (pick-ups, weights, times), saved with the move. */
+  @Column({ type: 'jsonb', nullable: true }) plan: Record<string, unknown> | null;
   @Column({ type: 'integer', nullable: true }) palletsLoaded: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesPlaced: number | null;
+  @Column({ type: 'integer', nullable: true }) coloniesLeftBehind: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLost: number | null;
-  @Column({ type: 'jsonb', nullable: true }) preRollCheck: Record<string, boolean> | null;
+  @Column({ type: 'jsonb', nullable: true }) placements: DropPlacementRecord[] | null;
+  @Column({ type: 'jsonb', nullable: true }) preRollCheck: Record<string, unknown> | null;
   @Column({ type: 'text' }) notes: string;
   @Column({ type: 'integer' }) version: number;
 }

@@ -21,6 +21,7 @@ import { Move } from './move.entity';
 import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
 import { MovesRepository, promisingStatuses } from './moves.repository';
+import { presentLoad, storeMovePlan } from './move-planning';
 
 export const moves = new TenantRepository(Move, 'Move');
 const ledger = new LedgerRepository();
@@ -37,15 +38,15 @@ export class MovesService {
   }
 
   private async present(db: DataSource | EntityManager, move: Move) {
-    const [origins, loads] = await Promise.all([
-      db.getRepository(MoveOrigin).find({
-        where: { operationId: move.operationId, moveId: move.id },
-        order: { pickupOrder: 'ASC' },
-      }),
-      db
-        .getRepository(MoveLoad)
-        .find({ where: { operationId: move.operationId, moveId: move.id } }),
-    ]);
+    // One after another: inside a transaction both queries share one connection.
+    const origins = await db.getRepository(MoveOrigin).find({
+      where: { operationId: move.operationId, moveId: move.id },
+      order: { pickupOrder: 'ASC' },
+    });
+    const loads = await db.getRepository(MoveLoad).find({
+      where: { operationId: move.operationId, moveId: move.id },
+      order: { position: 'ASC', id: 'ASC' },
+    });
     return {
       id: move.id,
       name: move.name,
@@ -65,18 +66,7 @@ export class MovesService {
         colonies: o.colonies,
         pickupOrder: o.pickupOrder,
       })),
-      loads: loads.map((l) => ({
-        id: l.id,
-        truckId: l.truckId,
-        driverNames: l.driverNames,
-        palletsPlanned: l.palletsPlanned,
-        coloniesPlanned: l.coloniesPlanned,
-        palletsLoaded: l.palletsLoaded,
-        coloniesPlaced: l.coloniesPlaced,
-        coloniesLost: l.coloniesLost,
-        notes: l.notes,
-        version: l.version,
-      })),
+      loads: loads.map(presentLoad),
       version: move.version,
       archivedAt: isoOrNull(move.archivedAt),
     };
@@ -173,16 +163,22 @@ export class MovesService {
       await tx.getRepository(MoveLoad).delete({ operationId: actor.operationId, moveId });
       if (input.loads.length) {
         await tx.getRepository(MoveLoad).insert(
-          input.loads.map((l) => ({
+          input.loads.map((l, position) => ({
             operationId: actor.operationId,
             moveId,
             truckId: l.truckId,
+            position,
             driverNames: l.driverNames ?? [],
             version: 1,
           })),
         );
       }
     }
+  }
+
+  /** Recomputes and stores the move's plan: each load's planned counts and page, the timeline. */
+  private async storePlan(tx: EntityManager, actor: Actor, moveId: string) {
+    await storeMovePlan(tx, actor.operationId, moveId);
   }
 
   async list(actor: Actor, query: z.infer<typeof moveListQuery>) {
@@ -211,7 +207,8 @@ export class MovesService {
       await this.checkReferences(tx, actor, { ...fields, origins, loads }, fields.destinationKind);
       const move = await moves.insert(tx, actor.operationId, { ...fields, status: 'draft' });
       await this.replaceParts(tx, actor, move.id, { origins, loads });
-      return this.present(tx, move);
+      await this.storePlan(tx, actor, move.id);
+      return this.present(tx, await moves.get(tx, actor.operationId, move.id));
     });
   }
 
@@ -239,7 +236,8 @@ export class MovesService {
       await this.replaceParts(tx, actor, id, { origins, loads });
       if (before.status === 'planned')
         await this.checkPromises(tx, actor, id, after.nightOf, await this.originsOf(tx, actor, id));
-      return this.present(tx, after);
+      await this.storePlan(tx, actor, id);
+      return this.present(tx, await moves.get(tx, actor.operationId, id));
     });
   }
 
@@ -262,26 +260,36 @@ export class MovesService {
    * (colonies leave each yard and arrive at the destination) in the same transaction.
    */
   async changeStatus(actor: Actor, id: string, version: number, status: MoveStatus) {
-    return this.db.transaction(async (tx) => {
-      const move = await moves.get(tx, actor.operationId, id);
-      if (!moveTransitions[move.status].includes(status)) {
-        throw new AppError(
-          409,
-          'conflict',
-          `A move that is ${move.status} cannot become ${status}.`,
-        );
-      }
-      if (actor.role === 'crew' && !['loading', 'rolling', 'placed'].includes(status)) {
-        throw AppError.forbidden(
-          'Crew mark moves loading, rolling and placed; planners do the rest.',
-        );
-      }
-      const origins = await this.originsOf(tx, actor, id);
-      if (status === 'planned') await this.checkPromises(tx, actor, id, move.nightOf, origins);
-      const updated = await moves.update(tx, actor.operationId, id, version, { status });
-      if (status === 'placed') await this.writePlacement(tx, actor, move, origins);
-      return this.present(tx, updated);
-    });
+    return this.db.transaction((tx) => this.changeStatusIn(tx, actor, id, version, status));
+  }
+
+  /** changeStatus inside the caller's transaction (offline sync applies each change in its own). */
+  async changeStatusIn(
+    tx: EntityManager,
+    actor: Actor,
+    id: string,
+    version: number,
+    status: MoveStatus,
+  ) {
+    const move = await moves.get(tx, actor.operationId, id);
+    if (!moveTransitions[move.status].includes(status)) {
+      throw new AppError(409, 'conflict', `A move that is ${move.status} cannot become ${status}.`);
+    }
+    if (actor.role === 'crew' && !['loading', 'rolling', 'placed'].includes(status)) {
+      throw AppError.forbidden(
+        'Crew mark moves loading, rolling and placed; planners do the rest.',
+      );
+    }
+    const origins = await this.originsOf(tx, actor, id);
+    if (status === 'planned') await this.checkPromises(tx, actor, id, move.nightOf, origins);
+    const updated = await moves.update(tx, actor.operationId, id, version, { status });
+    if (status === 'placed') await this.writePlacement(tx, actor, move, origins);
+    return this.present(tx, updated);
+  }
+
+  /** The move as the API presents it, read inside the caller's transaction. */
+  async presentIn(db: DataSource | EntityManager, actor: Actor, id: string) {
+    return this.present(db, await moves.get(db, actor.operationId, id));
   }
 
   /** Spreads each origin's colonies over the destinations in turn and records the moves. */

@@ -34,7 +34,8 @@ function presentWeights(s: WeightSample) {
     moveId: s.moveId,
     sampledOn: s.sampledOn,
     weightsKg: s.weightsKg,
-    summary: summariseWeightSamples(s.weightsKg),
+    // A spread needs two readings; a single one is kept but not summarised.
+    summary: s.weightsKg.length >= 2 ? summariseWeightSamples(s.weightsKg) : null,
     notes: s.notes,
     createdAt: s.createdAt.toISOString(),
   };

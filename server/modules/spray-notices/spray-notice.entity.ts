@@ -1,7 +1,7 @@
 import { Column, Entity } from 'typeorm';
 import { EditableRecord } from '../../db/base-columns';
 
-/** A grower's planned pesticide application at a site. */
+/** A grower's planned pesticide application at a site, and what the beekeeper did about it. */
 @Entity('spray_notices')
 export class SprayNotice extends EditableRecord {
   @Column({ type: 'uuid' }) growerId: string;
@@ -12,6 +12,8 @@ export class SprayNotice extends EditableRecord {
   @Column({ type: 'text' }) notes: string;
   @Column({ type: 'text' }) status: string;
   @Column({ type: 'text', nullable: true }) action: string | null;
+  @Column({ type: 'text' }) actionNote: string;
+  @Column({ type: 'uuid', nullable: true }) filedBy: string | null;
   @Column({ type: 'uuid', nullable: true }) acknowledgedBy: string | null;
   @Column({ type: 'timestamptz', nullable: true }) acknowledgedAt: Date | null;
 }

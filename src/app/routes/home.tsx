@@ -8,5 +8,6 @@ export const loader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const user = await requireUser(queryClient, request);
-    throw redirect(user.role === 'grower' ? paths.yourContracts : paths.yards);
+    // The map is the staff's home screen (DESIGN.md).
+    throw redirect(user.role === 'grower' ? paths.yourContracts : paths.atlas);
   };

@@ -19,6 +19,7 @@ export function navigationFor(role: Role): NavItem[] {
     case 'owner':
     case 'planner':
       return [
+        { to: paths.atlas, label: 'Atlas' },
         { to: paths.yards, label: 'Yards' },
         { to: paths.sites, label: 'Sites' },
         { to: paths.contracts, label: 'Growers & contracts', alsoActive: [paths.growers] },
@@ -26,6 +27,7 @@ export function navigationFor(role: Role): NavItem[] {
       ];
     case 'crew':
       return [
+        { to: paths.atlas, label: 'Atlas' },
         { to: paths.yards, label: 'Yards' },
         { to: paths.contracts, label: 'Contracts' },
         { to: paths.settings, label: 'Settings' },

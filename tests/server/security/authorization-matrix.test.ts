@@ -1,3 +1,6 @@
+import { randomUUID } from 'node:crypto';
+import { mkdir, rm, writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import {
@@ -85,6 +88,14 @@ const matrix: Record<string, Row> = {
   'PATCH /api/moves/:id': [401, 200, 200, 403, 403, 403, 404, 401],
   'POST /api/moves/:id/archive': [401, 200, 200, 403, 403, 403, 404, 401],
   'POST /api/moves/:id/status': [401, 200, 200, 403, 403, 403, 404, 401], // draft → planned: planners only
+  'POST /api/moves/preview': [401, 200, 200, 403, 403, 403, 400, 401], // other: not their yard
+  'GET /api/moves/availability': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/moves/sync': [401, 200, 200, 200, 403, 403, 200, 401], // other: its change answered 404 inside
+  'GET /api/moves/:id/load-sheet': [401, 200, 200, 200, 403, 403, 404, 401],
+  'PATCH /api/moves/:id/loads/:loadId': [401, 200, 200, 200, 403, 403, 404, 401],
+  'GET /api/calendar-feeds/me': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/calendar-feeds/me/rotate': [401, 200, 200, 200, 403, 403, 200, 401],
+  'GET /api/season': [401, 200, 200, 200, 403, 403, 200, 401],
   'GET /api/hive-setups': [401, 200, 200, 200, 403, 403, 200, 401],
   'GET /api/hive-setups/:id': [401, 200, 200, 200, 403, 403, 404, 401],
   'POST /api/hive-setups': [401, 201, 201, 403, 403, 403, 201, 401],
@@ -108,13 +119,68 @@ const matrix: Record<string, Row> = {
   'POST /api/weight-samples': [401, 201, 201, 201, 403, 403, 400, 401],
   'GET /api/strength-samples': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/strength-samples': [401, 201, 201, 201, 403, 403, 400, 401],
+  'POST /api/sites/:id/boundary': [401, 200, 200, 403, 403, 403, 404, 401],
+  'PATCH /api/sites/:id/drops': [401, 200, 200, 403, 403, 403, 404, 401],
+  'GET /api/atlas': [401, 200, 200, 200, 403, 403, 200, 401],
   'GET /api/crops': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/hive-weight': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/load-plan': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/move-window': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/site-plan': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/contracts/:id/proposals': [401, 201, 201, 403, 403, 403, 404, 401],
+  'GET /api/proposals': [401, 200, 200, 403, 200, 200, 200, 401],
+  'POST /api/proposals/:id/confirm': [401, 403, 403, 403, 200, 404, 403, 401], // growers answer
+  'POST /api/proposals/:id/decline': [401, 403, 403, 403, 200, 404, 403, 401],
+  'POST /api/proposals/:id/counter': [401, 403, 403, 403, 200, 404, 403, 401],
+  'GET /api/notifications': [401, 200, 200, 200, 403, 403, 200, 401],
+  'POST /api/notifications/:id/read': [401, 200, 404, 404, 403, 403, 404, 401], // the owner's own
+  'GET /api/spray-notices': [401, 200, 200, 200, 200, 200, 200, 401],
+  'GET /api/spray-notices/:id': [401, 200, 200, 200, 200, 404, 404, 401],
+  'POST /api/spray-notices': [401, 201, 201, 403, 201, 400, 400, 401], // grower A's site
+  'POST /api/spray-notices/:id/acknowledge': [401, 200, 200, 403, 403, 403, 404, 401],
+  'POST /api/spray-notices/:id/archive': [401, 200, 200, 403, 200, 404, 404, 401],
+  'GET /api/documents': [401, 200, 200, 200, 200, 200, 200, 401],
+  'GET /api/documents/:id': [401, 200, 200, 404, 200, 404, 404, 401], // a shared contract PDF
+  'GET /api/documents/:id/download': [401, 200, 200, 404, 200, 404, 404, 401],
+  'POST /api/documents': [401, 415, 415, 403, 403, 403, 415, 401], // JSON, not multipart: see documents.test.ts
+  'POST /api/documents/:id/share': [401, 200, 200, 403, 403, 403, 404, 401],
+  'POST /api/documents/:id/archive': [401, 200, 200, 403, 403, 403, 404, 401],
+  'GET /api/invoices': [401, 200, 200, 403, 200, 200, 200, 401],
+  'GET /api/invoices/export.csv': [401, 200, 403, 403, 403, 403, 200, 401],
+  'GET /api/invoices/:id': [401, 200, 200, 403, 200, 404, 404, 401],
+  'POST /api/invoices': [401, 201, 403, 403, 403, 403, 400, 401], // other: not their contract
+  'POST /api/invoices/:id/issue': [401, 200, 403, 403, 403, 403, 404, 401],
+  'POST /api/invoices/:id/void': [401, 200, 403, 403, 403, 403, 404, 401],
+  'POST /api/invoices/:id/checkout': [401, 409, 403, 403, 409, 404, 404, 401], // a draft: not payable yet
+  'GET /api/payments/export.csv': [401, 200, 403, 403, 403, 403, 200, 401],
+  'POST /api/payments/webhook': [400, 400, 400, 400, 400, 400, 400, 400], // unsigned: see payments.test.ts
+  'GET /api/receivables': [401, 200, 403, 403, 403, 403, 200, 401],
   // Last: signing out ends every client's session.
   'DELETE /api/session': [204, 204, 204, 204, 204, 204, 204, 204],
+};
+
+/** A 0.01° square block near Fresno with one drop inside it, for boundary and drop routes. */
+const matrixBlock = {
+  type: 'Polygon',
+  coordinates: [
+    [
+      [-120.3, 36.6],
+      [-120.29, 36.6],
+      [-120.29, 36.61],
+      [-120.3, 36.61],
+      [-120.3, 36.6],
+    ],
+  ],
+};
+const matrixDrops = {
+  type: 'FeatureCollection',
+  features: [
+    {
+      type: 'Feature',
+      properties: { drop: 1, pallets: 4, colonies: 16 },
+      geometry: { type: 'Point', coordinates: [-120.295, 36.605] },
+    },
+  ],
 };
 
 interface World {
@@ -141,8 +207,9 @@ async function freshTarget(
       return createYard(db, w.operationId);
     case 'sites':
       return one(
-        `INSERT INTO sites (operation_id, grower_id, name, kind, crop, latitude, longitude) VALUES ($1, $2, 'Block', 'orchard', 'almond', 36.6, -120.3) RETURNING id`,
-        [w.operationId, w.growerA],
+        `INSERT INTO sites (operation_id, grower_id, name, kind, crop, latitude, longitude, boundary, drops)
+         VALUES ($1, $2, 'Block', 'orchard', 'almond', 36.605, -120.295, $3, $4) RETURNING id`,
+        [w.operationId, w.growerA, JSON.stringify(matrixBlock), JSON.stringify(matrixDrops)],
       );
     case 'growers':
       // Reads need grower A (its own grower user may read it); writes get a grower of their own.
@@ -177,8 +244,69 @@ async function freshTarget(
       return one(`SELECT id FROM ledger_entries WHERE operation_id = $1 LIMIT 1`, [w.operationId]);
     case 'users':
       return (await createUser(db, w.operationId, 'crew')).id;
+    case 'proposals': {
+      const contract = await freshTarget(db, w, 'contracts');
+      await db.query(`UPDATE contracts SET status = 'offered' WHERE id = $1`, [contract]);
+      return one(
+        `INSERT INTO proposals (operation_id, contract_id, delivery_start_on, delivery_end_on, colonies, expires_at)
+         VALUES ($1, $2, '2027-02-05', '2027-02-10', 100, now() + interval '1 day') RETURNING id`,
+        [w.operationId, contract],
+      );
+    }
+    case 'notifications':
+      return one(
+        `INSERT INTO notifications (operation_id, user_id, kind, title)
+         SELECT operation_id, id, 'proposal-confirmed', 'Matrix' FROM users
+          WHERE operation_id = $1 AND role = 'owner' LIMIT 1 RETURNING id`,
+        [w.operationId],
+      );
+    case 'spray-notices':
+      return one(
+        `INSERT INTO spray_notices (operation_id, grower_id, site_id, starts_at, ends_at, product)
+         VALUES ($1, $2, $3, '2027-02-20T13:00Z', '2027-02-20T16:00Z', 'Matrix product') RETURNING id`,
+        [w.operationId, w.growerA, await freshTarget(db, w, 'sites')],
+      );
+    case 'invoices': {
+      // A draft deposit invoice of grower A, on a contract of its own.
+      const contract = await freshTarget(db, w, 'contracts');
+      return one(
+        `INSERT INTO invoices (operation_id, contract_id, grower_id, number, kind, status, lines, amount_cents)
+         VALUES ($1, $2, $3, (SELECT COALESCE(MAX(number), 0) + 1 FROM invoices WHERE operation_id = $1),
+                 'deposit', 'draft', '[]', 100000) RETURNING id`,
+        [w.operationId, contract, w.growerA],
+      );
+    }
+    case 'documents': {
+      // A contract PDF shared with grower A, with its file in the store.
+      const storedName = `${randomUUID()}.pdf`;
+      await mkdir(t.env.DOCUMENTS_DIR, { recursive: true });
+      await writeFile(path.join(t.env.DOCUMENTS_DIR, storedName), '%PDF-1.7 matrix');
+      storedDocuments.push(path.join(t.env.DOCUMENTS_DIR, storedName));
+      return one(
+        `INSERT INTO documents (operation_id, kind, original_name, stored_name, content_type, size_bytes, attached_kind, attached_id, shared_with_grower)
+         VALUES ($1, 'contract', 'matrix.pdf', $2, 'application/pdf', 15, 'contract', $3, true) RETURNING id`,
+        [w.operationId, storedName, await freshTarget(db, w, 'contracts')],
+      );
+    }
   }
   throw new Error(`no target for ${resource}`);
+}
+
+/** Query strings for GET routes that need one. */
+const routeQueries: Record<string, string> = {
+  'GET /api/moves/availability': '?nightOf=2027-01-28',
+  'GET /api/season': '?from=2027-01-01&to=2027-03-01',
+};
+
+/** Fills `:loadId` with a load of the (then planned) move, so crew may record on it. */
+async function withLoad(db: DataSource, w: World, url: string, moveId: string | null) {
+  if (!url.includes(':loadId') || !moveId) return url;
+  await db.query(`UPDATE moves SET status = 'planned' WHERE id = $1`, [moveId]);
+  const [load] = await db.query(
+    `INSERT INTO move_loads (operation_id, move_id, truck_id) VALUES ($1, $2, $3) RETURNING id`,
+    [w.operationId, moveId, w.truck],
+  );
+  return url.replace(':loadId', load.id);
 }
 
 const calcBodies: Record<string, object> = {
@@ -211,7 +339,11 @@ async function bodyFor(
 ): Promise<object> {
   const version = async () => {
     const table =
-      { 'hive-setups': 'hive_setups', 'colony-lots': 'colony_lots' }[resource] ?? resource;
+      {
+        'hive-setups': 'hive_setups',
+        'colony-lots': 'colony_lots',
+        'spray-notices': 'spray_notices',
+      }[resource] ?? resource;
     return (await db.query(`SELECT version FROM ${table} WHERE id = $1`, [id]))[0]
       .version as number;
   };
@@ -225,8 +357,47 @@ async function bodyFor(
     };
   }
   if (resource === 'calc') return calcBodies[tail];
+  if (tail === '/boundary')
+    return { format: 'geojson', text: JSON.stringify(matrixBlock), version: await version() };
+  if (tail === '/drops')
+    return { version: await version(), drop: 1, latitude: 36.604, longitude: -120.296 };
+  if (resource === 'moves' && tail === '/sync')
+    return {
+      changes: [
+        {
+          idempotencyKey: `matrix-${Math.random().toString(36).slice(2)}`,
+          kind: 'note',
+          moveId: await freshTarget(db, w, 'moves'),
+          payload: { text: 'matrix' },
+        },
+      ],
+    };
+  if (tail === '/loads/:loadId') return { version: 1, palletsLoaded: 3 };
+  if (resource === 'calendar-feeds') return {};
   if (tail === '/archive') return { version: await version() };
+  if (tail === '/proposals')
+    return { deliveryStartOn: '2027-02-05', deliveryEndOn: '2027-02-10', colonies: 90 };
+  if (tail === '/confirm' || tail === '/decline' || tail === '/read') return {};
+  if (tail === '/counter') return { deliveryStartOn: '2027-02-08', deliveryEndOn: '2027-02-12' };
+  if (tail === '/acknowledge') return { version: await version(), action: 'move' };
+  if (tail === '/share') return { version: await version(), sharedWithGrower: false };
+  if (resource === 'spray-notices')
+    return {
+      siteId: await freshTarget(db, w, 'sites'),
+      startsAt: '2027-02-20T05:00:00-08:00',
+      endsAt: '2027-02-20T08:00:00-08:00',
+      product: 'Matrix product',
+    };
   if (tail === '/status') return { version: await version(), status: 'planned' };
+  if (tail === '/issue' || tail === '/void') return { version: await version() };
+  if (tail === '/checkout' || tail === '/webhook') return {};
+  if (resource === 'invoices') {
+    const contractId = await freshTarget(db, w, 'contracts');
+    await db.query(`UPDATE contracts SET status = 'agreed', deposit_cents = 50000 WHERE id = $1`, [
+      contractId,
+    ]);
+    return { contractId, kind: 'deposit' };
+  }
   const create: Record<string, object> = {
     yards: { name: 'Matrix yard', latitude: 28, longitude: -98, capacity: 100 },
     sites: {
@@ -301,6 +472,15 @@ async function snapshot(db: DataSource, operationId: string) {
   const tables = [
     'weight_samples',
     'strength_samples',
+    'proposals',
+    'proposal_tokens',
+    'notifications',
+    'spray_notices',
+    'documents',
+    'sent_emails',
+    'invoices',
+    'payments',
+    'checkout_sessions',
     'yards',
     'sites',
     'growers',
@@ -364,7 +544,11 @@ beforeAll(async () => {
   // Deactivated behind the app's back: the cookie is still live, the account is not.
   await t.db.query(`UPDATE users SET active = false WHERE id = $1`, [deactivated.id]);
 }, 60_000);
-afterAll(() => t.close());
+const storedDocuments: string[] = [];
+afterAll(async () => {
+  await Promise.all(storedDocuments.map((file) => rm(file, { force: true })));
+  await t.close();
+});
 
 describe('authorization matrix', () => {
   it('when the app lists its routes then every one is in the matrix, and every matrix row is a route', () => {
@@ -386,7 +570,9 @@ describe('authorization matrix', () => {
       for (const actor of order) {
         const expected = row[actors.indexOf(actor)];
         const id = hasId ? await freshTarget(t.db, world, resource, method) : null;
-        const url = path.replace(':id', id ?? '');
+        const url =
+          (await withLoad(t.db, world, path.replace(':id', id ?? ''), id)) +
+          (routeQueries[route] ?? '');
         const body =
           method === 'GET' || method === 'DELETE'
             ? undefined

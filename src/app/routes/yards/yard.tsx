@@ -14,12 +14,29 @@ import { getLedgerEntriesQueryOptions } from '@/features/ledger/api/get-ledger-e
 import { ColonyCountsTable } from '@/features/ledger/components/colony-counts-table';
 import { LedgerEntryForm } from '@/features/ledger/components/ledger-entry-form';
 import { LedgerHistory } from '@/features/ledger/components/ledger-history';
+import { getStrengthSamplesQueryOptions } from '@/features/samples/api/get-strength-samples';
+import { getWeightSamplesQueryOptions } from '@/features/samples/api/get-weight-samples';
+import { ScaleReadings } from '@/features/samples/components/scale-readings';
+import {
+  ALMOND_MINIMUM_FRAMES,
+  StrengthChecks,
+} from '@/features/samples/components/strength-checks';
+import { StrengthSampleForm } from '@/features/samples/components/strength-sample-form';
+import { WeightSampleForm } from '@/features/samples/components/weight-sample-form';
 import { getColonyLotsQueryOptions } from '@/features/settings/api/get-colony-lots';
 import { useArchiveYard } from '@/features/yards/api/archive-yard';
 import { getYardQueryOptions } from '@/features/yards/api/get-yard';
-import { canPlan, useUser } from '@/lib/auth';
+import { canPlan, isStaff, useUser } from '@/lib/auth';
 import { requireRole } from '@/lib/route-guards';
 import { formatCount, formatDate } from '@/lib/units';
+
+const weightSamplesOf = (yardId: string) => getWeightSamplesQueryOptions({ yardId });
+const strengthSamplesOf = (yardId: string) =>
+  getStrengthSamplesQueryOptions({
+    placeKind: 'yard',
+    placeId: yardId,
+    minimumFrames: ALMOND_MINIMUM_FRAMES,
+  });
 
 export const loader =
   (queryClient: QueryClient) =>
@@ -31,14 +48,18 @@ export const loader =
       queryClient.ensureQueryData(getColonyCountsQueryOptions({ placeKind: 'yard', placeId: id })),
       queryClient.ensureQueryData(getColonyLotsQueryOptions()),
     ]);
+    // Samples load with the page but do not hold it up; their sections show a skeleton meanwhile.
+    void queryClient.prefetchQuery(weightSamplesOf(id));
+    void queryClient.prefetchQuery(strengthSamplesOf(id));
     return null;
   };
 
-/** /yards/:yardId: the yard, its colonies by lot, its ledger, and its notes. */
+/** /yards/:yardId: the yard, its colonies by lot, its samples, its ledger, and its notes. */
 export function YardRoute() {
   const id = useParams().yardId!;
   const user = useUser();
   const planner = canPlan(user);
+  const staff = isStaff(user);
   const toast = useToast();
   const navigate = useNavigate();
   const { data: yard } = useSuspenseQuery(getYardQueryOptions(id));
@@ -47,9 +68,12 @@ export function YardRoute() {
   );
   const { data: lots } = useSuspenseQuery(getColonyLotsQueryOptions());
   const history = useQuery(getLedgerEntriesQueryOptions({ placeKind: 'yard', placeId: id }));
+  const weights = useQuery(weightSamplesOf(id));
+  const strength = useQuery(strengthSamplesOf(id));
   const archive = useArchiveYard();
   const [recording, setRecording] = useState(false);
   const [confirmArchive, setConfirmArchive] = useState(false);
+  const [sampling, setSampling] = useState<'weights' | 'strength' | null>(null);
 
   const lotNames = Object.fromEntries(lots.items.map((l) => [l.id, l.name]));
   const lotChoices = lots.items.map((lot) => ({
@@ -59,6 +83,12 @@ export function YardRoute() {
       .filter((c) => c.lotId === lot.id)
       .reduce((sum, c) => sum + c.colonies, 0),
   }));
+  // The lots here today (from the ledger's counts), for the sample forms.
+  const lotsHere = lotChoices.filter((lot) => lot.coloniesHere > 0);
+  const sampleRecorded = (summary: string) => {
+    setSampling(null);
+    toast.show(summary);
+  };
 
   const archiveYard = () =>
     archive.mutate(
@@ -95,6 +125,42 @@ export function YardRoute() {
         <div className="flex flex-col gap-6 lg:col-span-2">
           <Section title="Colonies here today">
             <ColonyCountsTable counts={counts.items} placeName={yard.name} />
+          </Section>
+          <Section
+            title="Scale readings"
+            actions={
+              staff && (
+                <Button size="sm" variant="secondary" onClick={() => setSampling('weights')}>
+                  Record weights
+                </Button>
+              )
+            }
+          >
+            {weights.isPending ? (
+              <TableSkeleton rows={3} label="Loading scale readings" />
+            ) : weights.isError ? (
+              <FormAlert error={weights.error} />
+            ) : (
+              <ScaleReadings samples={weights.data.items} lotNames={lotNames} units={user.units} />
+            )}
+          </Section>
+          <Section
+            title="Strength checks"
+            actions={
+              staff && (
+                <Button size="sm" variant="secondary" onClick={() => setSampling('strength')}>
+                  Record strength check
+                </Button>
+              )
+            }
+          >
+            {strength.isPending ? (
+              <TableSkeleton rows={3} label="Loading strength checks" />
+            ) : strength.isError ? (
+              <FormAlert error={strength.error} />
+            ) : (
+              <StrengthChecks samples={strength.data.items} lotNames={lotNames} />
+            )}
           </Section>
           <Section title="Ledger history">
             {history.isPending ? (
@@ -141,6 +207,33 @@ export function YardRoute() {
             setRecording(false);
             toast.show(`Recorded: ${summary}`);
           }}
+        />
+      </Dialog>
+      <Dialog
+        open={sampling === 'weights'}
+        title={`Record hive weights at ${yard.name}`}
+        onClose={() => setSampling(null)}
+      >
+        <WeightSampleForm
+          yardId={yard.id}
+          yardName={yard.name}
+          lots={lotsHere}
+          units={user.units}
+          onCancel={() => setSampling(null)}
+          onRecorded={sampleRecorded}
+        />
+      </Dialog>
+      <Dialog
+        open={sampling === 'strength'}
+        title={`Record a strength check at ${yard.name}`}
+        onClose={() => setSampling(null)}
+      >
+        <StrengthSampleForm
+          yardId={yard.id}
+          yardName={yard.name}
+          lots={lotsHere}
+          onCancel={() => setSampling(null)}
+          onRecorded={sampleRecorded}
         />
       </Dialog>
       <Dialog

@@ -45,6 +45,14 @@ describe('/api/weight-samples and /api/strength-samples', () => {
     expect(body.summary.meanFrames).toBeCloseTo(57 / 8, 10);
   });
 
+  it('when a single hive is weighed then it is kept without a spread', async () => {
+    const { body } = await crew
+      .post('/api/weight-samples', { yardId: yard, sampledOn: '2026-11-22', weightsKg: [51] })
+      .expect(201);
+    expect(body.summary).toBeNull();
+    await crew.get(`/api/weight-samples?yardId=${yard}`).expect(200);
+  });
+
   it('when a reading is impossible then 400 names it and nothing is written', async () => {
     const response = await crew
       .post('/api/weight-samples', { yardId: yard, sampledOn: '2026-11-31', weightsKg: [-3] })
@@ -53,6 +61,6 @@ describe('/api/weight-samples and /api/strength-samples', () => {
       'sampledOn',
       'weightsKg.0',
     ]);
-    expect((await crew.get(`/api/weight-samples?yardId=${yard}`)).body.total).toBe(1);
+    expect((await crew.get(`/api/weight-samples?yardId=${yard}`)).body.total).toBe(2);
   });
 });
