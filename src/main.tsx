@@ -1,3 +1,4 @@
+/// <reference types="vite-plugin-pwa/client" />
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import '@fontsource/ibm-plex-sans/400.css';
@@ -8,6 +9,11 @@ import { AppProvider } from './app/provider';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('The page has no #root element.');
+
+// The service worker keeps the app and tonight's data for the cab; production builds only.
+if (import.meta.env.PROD && 'serviceWorker' in navigator) {
+  void import('virtual:pwa-register').then(({ registerSW }) => registerSW({ immediate: true }));
+}
 
 createRoot(root).render(
   <StrictMode>

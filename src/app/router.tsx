@@ -34,6 +34,14 @@ import * as settingsHiveSetups from './routes/settings/hive-setups';
 import * as settingsColonyLots from './routes/settings/colony-lots';
 import * as settingsPeople from './routes/settings/people';
 import * as settingsCrops from './routes/settings/crops';
+import * as moves from './routes/moves/moves';
+import * as move from './routes/moves/move';
+import * as moveNew from './routes/moves/move-new';
+import * as moveEdit from './routes/moves/move-edit';
+import * as movePrint from './routes/moves/move-print';
+import * as calendarFeed from './routes/moves/calendar-feed';
+import * as tonight from './routes/tonight/tonight';
+import * as season from './routes/season/season';
 
 const errorElement = <RouteError />;
 
@@ -86,6 +94,13 @@ export function routes(queryClient: QueryClient): RouteObject[] {
               contractEdit.loader,
               <contractEdit.ContractEditRoute />,
             ),
+            page('moves', moves.loader, <moves.MovesRoute />),
+            page('moves/new', moveNew.loader, <moveNew.MoveNewRoute />),
+            page('moves/:moveId', move.loader, <move.MoveRoute />),
+            page('moves/:moveId/edit', moveEdit.loader, <moveEdit.MoveEditRoute />),
+            page('moves/:moveId/print', movePrint.loader, <movePrint.MovePrintRoute />),
+            page('tonight', tonight.loader, <tonight.TonightRoute />),
+            page('season', season.loader, <season.SeasonRoute />),
             page('your-contracts', yourContracts.loader, <yourContracts.YourContractsRoute />),
             {
               ...page('settings', settingsLayout.loader, <settingsLayout.SettingsLayoutRoute />),
@@ -105,6 +120,7 @@ export function routes(queryClient: QueryClient): RouteObject[] {
                 ),
                 page('people', settingsPeople.loader, <settingsPeople.SettingsPeopleRoute />),
                 page('crops', settingsCrops.loader, <settingsCrops.SettingsCropsRoute />),
+                page('calendar', calendarFeed.loader, <calendarFeed.CalendarFeedRoute />),
               ],
             },
             { path: '*', element: <NotFoundRoute /> },

@@ -27,4 +27,12 @@ export const paths = {
   settingsColonyLots: '/settings/colony-lots',
   settingsPeople: '/settings/people',
   settingsCrops: '/settings/crops',
+  settingsCalendar: '/settings/calendar',
+  moves: '/moves',
+  moveNew: '/moves/new',
+  move: (id: string) => `/moves/${id}`,
+  moveEdit: (id: string) => `/moves/${id}/edit`,
+  movePrint: (id: string) => `/moves/${id}/print`,
+  tonight: '/tonight',
+  season: '/season',
 } as const;

@@ -23,10 +23,16 @@ export function navigationFor(role: Role): NavItem[] {
         { to: paths.yards, label: 'Yards' },
         { to: paths.sites, label: 'Sites' },
         { to: paths.contracts, label: 'Growers & contracts', alsoActive: [paths.growers] },
+        { to: paths.moves, label: 'Moves' },
+        { to: paths.season, label: 'Season' },
+        { to: paths.tonight, label: 'Tonight' },
         { to: paths.settings, label: 'Settings' },
       ];
     case 'crew':
       return [
+        { to: paths.tonight, label: 'Tonight' },
+        { to: paths.moves, label: 'Moves' },
+        { to: paths.season, label: 'Season' },
         { to: paths.atlas, label: 'Atlas' },
         { to: paths.yards, label: 'Yards' },
         { to: paths.contracts, label: 'Contracts' },
@@ -95,7 +101,7 @@ export function AppLayout({ children }: { children: ReactNode }) {
       >
         Skip to content
       </a>
-      <header className="border-b border-dusk-700 bg-dusk-950">
+      <header className="border-b border-dusk-700 bg-dusk-950 print:hidden">
         <div className="mx-auto flex max-w-6xl items-center justify-between gap-3 px-4 py-3">
           <div className="flex items-center gap-6">
             <span className="flex flex-col leading-tight">

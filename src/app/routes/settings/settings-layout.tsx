@@ -34,6 +34,7 @@ export function SettingsLayoutRoute() {
       : []),
     ...(staff && crops.data ? [{ to: paths.settingsCrops, label: 'Crop stocking rates' }] : []),
     ...(user.role === 'owner' ? [{ to: paths.settingsPeople, label: 'People' }] : []),
+    { to: paths.settingsCalendar, label: 'Calendar' },
   ];
   return (
     <>

@@ -1,0 +1,262 @@
+import { useState } from 'react';
+import type { Units } from '@shared/schemas/users';
+import { weightToKg, weightUnit } from '@/lib/units';
+import type { NewChange } from '../lib/offline-queue';
+import type { TonightLoad, TonightMove } from '../types';
+import { Counter } from './counter';
+
+interface Props {
+  move: TonightMove;
+  load: TonightLoad;
+  units: Units;
+  onChange: (change: NewChange) => void;
+}
+
+/** "20:34 (UTC-06:00)": the wall clock of the place, as the API wrote it. */
+const clock = (iso: string | null) => (iso ? `${iso.slice(11, 16)} (UTC${iso.slice(19)})` : '—');
+
+const numberOrNull = (text: string) =>
+  text.trim() === '' ? null : Math.max(0, Math.floor(Number(text)) || 0);
+
+/** One truck tonight: pick-ups, pallets loaded, weights, notes, and what was placed or lost. */
+export function LoadCard({ move, load, units, onChange }: Props) {
+  const recorded = load.recorded;
+  const counts = (payload: Record<string, unknown>, label: string) =>
+    onChange({
+      kind: 'load-counts',
+      moveId: move.id,
+      loadId: load.loadId,
+      baseVersion: recorded.version,
+      payload,
+      label: `${load.truckName}: ${label}`,
+    });
+
+  const placedAt = (placeId: string) =>
+    recorded.placements?.find((p) => p.placeId === placeId)?.colonies ?? null;
+  const [placed, setPlaced] = useState<Record<string, string>>(() =>
+    Object.fromEntries(move.destinations.map((d) => [d.id, String(placedAt(d.id) ?? '')])),
+  );
+  const [drops, setDrops] = useState<Record<string, string>>(() =>
+    Object.fromEntries(
+      move.destinations.map((d) => [
+        d.id,
+        recorded.placements?.find((p) => p.placeId === d.id)?.drop ?? '',
+      ]),
+    ),
+  );
+  const [leftBehind, setLeftBehind] = useState(String(recorded.coloniesLeftBehind ?? ''));
+  const [lost, setLost] = useState(String(recorded.coloniesLost ?? ''));
+  const [weightStop, setWeightStop] = useState(0);
+  const [weights, setWeights] = useState('');
+  const [note, setNote] = useState('');
+  const [saidSaved, setSaidSaved] = useState<string | null>(null);
+
+  const savePlacements = () => {
+    const placements = move.destinations
+      .map((d) => ({
+        placeId: d.id,
+        ...(drops[d.id]?.trim() ? { drop: drops[d.id].trim() } : {}),
+        colonies: numberOrNull(placed[d.id] ?? '') ?? 0,
+      }))
+      .filter((p) => p.colonies > 0);
+    const coloniesPlaced = placements.reduce((sum, p) => sum + p.colonies, 0);
+    counts(
+      {
+        placements,
+        coloniesPlaced,
+        coloniesLeftBehind: numberOrNull(leftBehind),
+        coloniesLost: numberOrNull(lost),
+      },
+      `${coloniesPlaced} colonies placed`,
+    );
+    setSaidSaved('Placed counts kept.');
+  };
+
+  const saveWeights = () => {
+    const stop = load.stops[weightStop];
+    const values = weights
+      .split(/[\s,;]+/)
+      .map(Number)
+      .filter((n) => Number.isFinite(n) && n > 0)
+      .map((n) => Math.round(weightToKg(n, units) * 10) / 10);
+    if (!stop || values.length === 0) return;
+    onChange({
+      kind: 'weights',
+      moveId: move.id,
+      payload: {
+        yardId: stop.yardId,
+        lotId: stop.lotId,
+        sampledOn: move.nightOf,
+        weightsKg: values,
+      },
+      label: `${load.truckName}: ${values.length} hive weights at ${stop.yardName}`,
+    });
+    setWeights('');
+    setSaidSaved(`${values.length} weights kept.`);
+  };
+
+  const saveNote = () => {
+    if (!note.trim()) return;
+    onChange({
+      kind: 'note',
+      moveId: move.id,
+      loadId: load.loadId,
+      payload: { text: note.trim() },
+      label: `${load.truckName}: a note`,
+    });
+    setNote('');
+    setSaidSaved('Note kept.');
+  };
+
+  return (
+    <article
+      className="tn-surface flex flex-col gap-4 p-4"
+      aria-label={load.truckName}
+      data-load={load.loadId}
+    >
+      <header>
+        <h3 className="text-xl font-semibold">{load.truckName}</h3>
+        <p className="tn-muted">
+          {load.driverNames.length ? load.driverNames.join(' & ') : 'No driver named'} ·{' '}
+          {load.pallets} pallets, {load.colonies} colonies planned
+        </p>
+      </header>
+      <ol className="flex flex-col gap-2">
+        {load.stops.map((stop, i) => (
+          <li key={`${stop.yardId}-${stop.lotId}`} className="border-l-4 tn-line pl-3">
+            <p className="font-semibold">
+              {i + 1}. {stop.yardName} — {stop.pallets} pallets
+            </p>
+            <p className="tn-muted text-sm">{stop.lotName}</p>
+            {stop.accessNotes && <p className="text-sm">{stop.accessNotes}</p>}
+          </li>
+        ))}
+      </ol>
+      <div>
+        <p className="mb-2 font-semibold">Pallets loaded</p>
+        <Counter
+          label={`Pallets loaded on ${load.truckName}`}
+          value={recorded.palletsLoaded ?? 0}
+          onChange={(value) => counts({ palletsLoaded: value }, `${value} pallets loaded`)}
+        />
+      </div>
+      <details>
+        <summary className="tn-button inline-flex items-center">Placed, left behind, lost</summary>
+        <div className="mt-3 flex flex-col gap-3">
+          {move.destinations.map((d) => (
+            <div key={d.id} className="grid grid-cols-2 gap-2">
+              <label className="flex flex-col gap-1">
+                <span>Placed at {d.name}</span>
+                <input
+                  className="tn-input"
+                  inputMode="numeric"
+                  type="number"
+                  min={0}
+                  value={placed[d.id] ?? ''}
+                  onChange={(e) => setPlaced({ ...placed, [d.id]: e.target.value })}
+                />
+              </label>
+              <label className="flex flex-col gap-1">
+                <span>Drop</span>
+                <input
+                  className="tn-input"
+                  value={drops[d.id] ?? ''}
+                  maxLength={40}
+                  placeholder="e.g. 3"
+                  onChange={(e) => setDrops({ ...drops, [d.id]: e.target.value })}
+                />
+              </label>
+            </div>
+          ))}
+          <div className="grid grid-cols-2 gap-2">
+            <label className="flex flex-col gap-1">
+              <span>Left behind</span>
+              <input
+                className="tn-input"
+                type="number"
+                min={0}
+                inputMode="numeric"
+                value={leftBehind}
+                onChange={(e) => setLeftBehind(e.target.value)}
+              />
+            </label>
+            <label className="flex flex-col gap-1">
+              <span>Lost</span>
+              <input
+                className="tn-input"
+                type="number"
+                min={0}
+                inputMode="numeric"
+                value={lost}
+                onChange={(e) => setLost(e.target.value)}
+              />
+            </label>
+          </div>
+          <button type="button" className="tn-button tn-button-primary" onClick={savePlacements}>
+            Keep placed counts
+          </button>
+        </div>
+      </details>
+      <details>
+        <summary className="tn-button inline-flex items-center">Hive weights and notes</summary>
+        <div className="mt-3 flex flex-col gap-3">
+          {load.stops.length > 1 && (
+            <label className="flex flex-col gap-1">
+              <span>Weighed at</span>
+              <select
+                className="tn-input"
+                value={weightStop}
+                onChange={(e) => setWeightStop(Number(e.target.value))}
+              >
+                {load.stops.map((s, i) => (
+                  <option key={`${s.yardId}-${s.lotId}`} value={i}>
+                    {s.yardName} ({s.lotName})
+                  </option>
+                ))}
+              </select>
+            </label>
+          )}
+          <label className="flex flex-col gap-1">
+            <span>Weights ({weightUnit(units)}), separated by spaces</span>
+            <input
+              className="tn-input"
+              inputMode="decimal"
+              value={weights}
+              placeholder={units === 'imperial' ? '128 121 135' : '58 55 61'}
+              onChange={(e) => setWeights(e.target.value)}
+            />
+          </label>
+          <button type="button" className="tn-button" onClick={saveWeights}>
+            Keep weights
+          </button>
+          <label className="flex flex-col gap-1">
+            <span>Note</span>
+            <textarea
+              className="tn-input py-2"
+              rows={2}
+              value={note}
+              maxLength={2000}
+              onChange={(e) => setNote(e.target.value)}
+            />
+          </label>
+          <button type="button" className="tn-button" onClick={saveNote}>
+            Keep note
+          </button>
+          {recorded.notes && (
+            <p className="tn-muted whitespace-pre-line text-sm">{recorded.notes}</p>
+          )}
+        </div>
+      </details>
+      {saidSaved && (
+        <p className="tn-muted text-sm" role="status">
+          {saidSaved} It goes to the office with the next sync.
+        </p>
+      )}
+      {load.departure && (
+        <p className="tn-muted text-sm">
+          Planned: rolls {clock(load.departure)}, arrives {clock(load.arrival)}.
+        </p>
+      )}
+    </article>
+  );
+}

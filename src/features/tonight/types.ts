@@ -1,0 +1,89 @@
+import type { MoveStatus, SyncKind, SyncOutcome } from '@shared/schemas/moves';
+
+/** A drop's placement: colonies set down at one destination (and drop). */
+export interface Placement {
+  placeId: string;
+  drop?: string;
+  colonies: number;
+}
+
+/** What the crew records on a load. */
+export interface LoadRecord {
+  palletsLoaded: number | null;
+  coloniesPlaced: number | null;
+  coloniesLeftBehind: number | null;
+  coloniesLost: number | null;
+  placements: Placement[] | null;
+  notes: string;
+  version: number;
+}
+
+/** One truck of tonight's move, from the move's load sheet. */
+export interface TonightLoad {
+  loadId: string;
+  key: string;
+  truckName: string;
+  driverNames: string[];
+  pallets: number;
+  colonies: number;
+  departure: string | null;
+  arrival: string | null;
+  stops: Array<{
+    yardId: string;
+    yardName: string;
+    lotId: string;
+    lotName: string;
+    pallets: number;
+    colonies: number;
+    accessNotes: string;
+    civilDusk: string | null;
+    timeZone: string;
+  }>;
+  recorded: LoadRecord;
+}
+
+/** A move of tonight (or tomorrow) with what the crew needs in the cab. */
+export interface TonightMove {
+  id: string;
+  name: string;
+  nightOf: string;
+  status: MoveStatus;
+  version: number;
+  destinations: Array<{ id: string; name: string; accessNotes: string }>;
+  loads: TonightLoad[];
+  cautions: Array<{ code: string; message: string }>;
+}
+
+/** What Tonight shows, kept on the device for when there is no signal. */
+export interface TonightSnapshot {
+  fetchedAt: string;
+  /** The nights shown (today and tomorrow, or the next night with moves). */
+  nights: string[];
+  /** True when nothing is on today or tomorrow and the next night with moves is shown. */
+  upcoming: boolean;
+  moves: TonightMove[];
+}
+
+/** One change as POST /api/moves/sync takes it. */
+export interface SyncChange {
+  idempotencyKey: string;
+  kind: SyncKind;
+  moveId: string;
+  loadId?: string;
+  version?: number;
+  payload: Record<string, unknown>;
+}
+
+/** What became of one change. */
+export interface SyncResult {
+  index: number;
+  idempotencyKey: string;
+  kind: SyncKind;
+  moveId: string;
+  loadId: string | null;
+  outcome: SyncOutcome;
+  status: number;
+  record?: Record<string, unknown> & { version?: number };
+  current?: Record<string, unknown> & { version?: number };
+  error?: { code: string; message: string; details?: unknown };
+}
