@@ -10,6 +10,8 @@ source scripts/lib/session-secret.sh
 
 ensure_node_modules
 export PORT=${PORT:-3000}
+# Links in e-mails and payment return pages point back here.
+export APP_URL=${APP_URL:-http://localhost:$PORT}
 mkdir -p .data
 
 SERVER_PID=
@@ -46,6 +48,7 @@ node --import tsx scripts/wait-for-health.ts "http://127.0.0.1:$PORT/api/health"
     owner@second.test   owner of a separate operation (isolation)
 
   E-mail outbox (fake SMTP): http://127.0.0.1:${FAKE_SMTP_HTTP_PORT:-1080}/
+  Online payments go to a local stand-in of the payment provider on 127.0.0.1.
 
   Ctrl-C stops the app and its database; the data is kept in .data/.
 MSG
