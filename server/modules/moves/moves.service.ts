@@ -22,6 +22,7 @@ import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
 import { MovesRepository, promisingStatuses } from './moves.repository';
 import { presentLoad, storeMovePlan } from './move-planning';
+import { apportion } from '../../../shared/domain/apportion';
 
 export const moves = new TenantRepository(Move, 'Move');
 const ledger = new LedgerRepository();
@@ -292,21 +293,68 @@ export class MovesService {
     return this.present(db, await moves.get(db, actor.operationId, id));
   }
 
-  /** Spreads each origin's colonies over the destinations in turn and records the moves. */
+  /**
+   * Writes what the crew recorded into the ledger: colonies left behind stay in their yard (no
+   * entry), colonies lost on the way leave their yard as a loss, and the rest move to the
+   * destinations — in the proportions of the recorded placements per destination, or evenly when
+   * none were recorded. Left-behind and lost colonies are taken from the origins in proportion to
+   * what each contributed (largest remainder), since the crew count them per truck, not per yard.
+   */
   private async writePlacement(tx: EntityManager, actor: Actor, move: Move, origins: MoveOrigin[]) {
+    const loads = await tx
+      .getRepository(MoveLoad)
+      .find({ where: { operationId: actor.operationId, moveId: move.id } });
+    const planned = origins.map((o) => o.colonies);
+    const total = planned.reduce((a, b) => a + b, 0);
+    const leftBehind = loads.reduce((sum, l) => sum + (l.coloniesLeftBehind ?? 0), 0);
+    const lost = loads.reduce((sum, l) => sum + (l.coloniesLost ?? 0), 0);
+    if (leftBehind + lost > total) {
+      throw new AppError(
+        409,
+        'conflict',
+        `The loads record ${leftBehind} left behind and ${lost} lost, more than the ${total} colonies of this move.`,
+      );
+    }
+    const leftPer = apportion(leftBehind, planned);
+    const lostPer = apportion(
+      lost,
+      planned.map((p, i) => p - leftPer[i]),
+    );
+
     const destinations = move.destinationIds;
-    for (const origin of origins) {
-      const share = Math.floor(origin.colonies / destinations.length);
-      let extra = origin.colonies % destinations.length;
-      for (const destinationId of destinations) {
-        const colonies = share + (extra-- > 0 ? 1 : 0);
-        if (colonies === 0) continue;
+    const recorded = new Map<string, number>();
+    for (const placement of loads.flatMap((l) => l.placements ?? [])) {
+      if (destinations.includes(placement.placeId))
+        recorded.set(
+          placement.placeId,
+          (recorded.get(placement.placeId) ?? 0) + placement.colonies,
+        );
+    }
+    const recordedTotal = [...recorded.values()].reduce((a, b) => a + b, 0);
+    const weights = destinations.map((d) => (recordedTotal > 0 ? (recorded.get(d) ?? 0) : 1));
+
+    for (const [i, origin] of origins.entries()) {
+      const from = { kind: 'yard' as const, id: origin.yardId };
+      if (lostPer[i] > 0) {
+        await this.ledgerService.record(tx, actor, {
+          lotId: origin.lotId,
+          kind: 'loss',
+          occurredOn: move.nightOf,
+          colonies: lostPer[i],
+          from,
+          reason: `Lost in transit on move "${move.name}"`,
+          moveId: move.id,
+        });
+      }
+      const moved = apportion(origin.colonies - leftPer[i] - lostPer[i], weights);
+      for (const [d, destinationId] of destinations.entries()) {
+        if (moved[d] === 0) continue;
         await this.ledgerService.record(tx, actor, {
           lotId: origin.lotId,
           kind: 'move',
           occurredOn: move.nightOf,
-          colonies,
-          from: { kind: 'yard', id: origin.yardId },
+          colonies: moved[d],
+          from,
           to: { kind: move.destinationKind, id: destinationId },
           reason: `Placed by move "${move.name}"`,
           moveId: move.id,

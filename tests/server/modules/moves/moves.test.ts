@@ -101,6 +101,65 @@ describe('/api/moves', () => {
     expect(entries).toEqual([{ kind: 'move', colonies: 30 }]);
   });
 
+  it('when the crew recorded left-behind and lost colonies then placing writes exactly those to the ledger', async () => {
+    const second = await createYard(t.db, operationId, 'Second destination');
+    const { body: move } = await planner
+      .post('/api/moves', {
+        name: 'Counted haul',
+        nightOf: '2027-01-23',
+        destinationKind: 'yard',
+        destinationIds: [destination, second],
+        origins: [{ yardId: yard, lotId: lot, colonies: 20 }],
+      })
+      .expect(201);
+    await planner
+      .post(`/api/moves/${move.id}/status`, { version: 1, status: 'planned' })
+      .expect(200);
+    const before = (await planner.get('/api/ledger/counts?on=2027-01-24').expect(200)).body.items;
+    const countIn = (items: Array<{ placeId: string; colonies: number }>, id: string) =>
+      items.filter((c) => c.placeId === id).reduce((s, c) => s + c.colonies, 0);
+    // Record on a load: 2 left behind, 1 lost, the rest placed 12 : 5 over the two destinations.
+    const [truck] = await t.db.query(
+      `INSERT INTO trucks (operation_id, name, payload_kg, pallet_spots, tiers, tare_kg, legal_gross_kg) VALUES ($1, 'Counted rig', 21000, 24, 2, 15000, 36287) RETURNING id`,
+      [operationId],
+    );
+    await t.db.query(
+      `INSERT INTO move_loads (operation_id, move_id, truck_id, colonies_planned, colonies_left_behind, colonies_lost, placements)
+       VALUES ($1, $2, $3, 20, 2, 1, $4)`,
+      [
+        operationId,
+        move.id,
+        truck.id,
+        JSON.stringify([
+          { placeId: destination, colonies: 12 },
+          { placeId: second, colonies: 5 },
+        ]),
+      ],
+    );
+    await planner
+      .post(`/api/moves/${move.id}/status`, { version: 2, status: 'loading' })
+      .expect(200);
+    await planner
+      .post(`/api/moves/${move.id}/status`, { version: 3, status: 'rolling' })
+      .expect(200);
+    await planner
+      .post(`/api/moves/${move.id}/status`, { version: 4, status: 'placed' })
+      .expect(200);
+    const after = (await planner.get('/api/ledger/counts?on=2027-01-24').expect(200)).body.items;
+    expect(countIn(after, yard) - countIn(before, yard)).toBe(-18); // 2 stayed behind
+    expect(countIn(after, destination) - countIn(before, destination)).toBe(12);
+    expect(countIn(after, second) - countIn(before, second)).toBe(5);
+    const entries = await t.db.query(
+      `SELECT kind, colonies FROM ledger_entries WHERE move_id = $1 ORDER BY kind, colonies`,
+      [move.id],
+    );
+    expect(entries).toEqual([
+      { kind: 'loss', colonies: 1 },
+      { kind: 'move', colonies: 5 },
+      { kind: 'move', colonies: 12 },
+    ]);
+  });
+
   it('when placing fails part-way then nothing of it is written', async () => {
     const move = await draft(10, '2027-01-24');
     await planner
