@@ -15,6 +15,7 @@ import type { SessionUser } from '../../../shared/schemas/users';
 declare module 'express-session' {
   interface SessionData {
     signedInAt?: number;
+    keptAliveAt?: number;
   }
 }
 declare global {
@@ -35,13 +36,21 @@ export function createSessionLayer(db: DataSource, env: Env) {
   const users = new SessionUsers(db);
   const throttle = new SignInThrottle(db);
   const PgStore = connectPgSimple(session);
+  // Rolling sessions would otherwise UPDATE the session row on every request. The store's touch
+  // is skipped and `keepAlive` re-saves a signed-in session at most once a minute instead, so the
+  // idle timeout holds to the minute at a fraction of the writes.
+  class QuietStore extends PgStore {
+    touch(_sid: string, _session: session.SessionData, callback?: () => void) {
+      callback?.();
+    }
+  }
   const pool = (db.driver as unknown as { master: Pool }).master;
   const secure = env.HTTPS === 'true';
 
   const sessionMiddleware = session({
     name: secure ? '__Host-duskhaul' : 'duskhaul.sid',
     secret: env.SESSION_SECRET,
-    store: new PgStore({
+    store: new QuietStore({
       pool,
       tableName: 'sessions',
       createTableIfMissing: false,
@@ -97,6 +106,15 @@ export function createSessionLayer(db: DataSource, env: Env) {
     next();
   };
 
+  const keepAlive: RequestHandler = (req, _res, next) => {
+    const signedIn = Boolean(
+      (req.session as { passport?: { user?: string } } | undefined)?.passport?.user,
+    );
+    if (signedIn && Date.now() - (req.session.keptAliveAt ?? 0) > 60_000)
+      req.session.keptAliveAt = Date.now();
+    next();
+  };
+
   const csrf = csrfSync({ getTokenFromRequest: (req) => req.get('x-csrf-token') });
 
   return {
@@ -104,6 +122,7 @@ export function createSessionLayer(db: DataSource, env: Env) {
     middleware: [
       sessionMiddleware,
       absoluteTimeout,
+      keepAlive,
       passport.initialize(),
       passport.session(),
     ] as RequestHandler[],
