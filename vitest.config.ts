@@ -26,6 +26,8 @@ export default defineConfig({
           environment: 'jsdom',
           include: ['tests/client/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/client/setup.ts'],
+          // user-event typing in jsdom is slow on a busy 2-core machine.
+          testTimeout: 30_000,
         },
       },
       {

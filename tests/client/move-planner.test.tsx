@@ -1,4 +1,4 @@
-import { screen, within } from '@testing-library/react';
+import { fireEvent, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { MovePlanner } from '@/features/moves/components/move-planner';
@@ -206,15 +206,18 @@ describe('MovePlanner', () => {
     expect(
       (screen.getByLabelText('Colonies from Yucca Flat, Spring splits') as HTMLInputElement).value,
     ).toBe('90');
-    await vi.waitFor(() => {
-      const previews = requests.filter((r) => r.url === '/api/moves/preview');
-      const last = previews.at(-1)!.body as {
-        origins: Array<{ colonies: number }>;
-        loads: unknown[];
-      };
-      expect(last.origins.map((o) => o.colonies)).toEqual([150, 90]);
-      expect(last.loads).toHaveLength(2);
-    });
+    await vi.waitFor(
+      () => {
+        const previews = requests.filter((r) => r.url === '/api/moves/preview');
+        const last = previews.at(-1)!.body as {
+          origins: Array<{ colonies: number }>;
+          loads: unknown[];
+        };
+        expect(last.origins.map((o) => o.colonies)).toEqual([150, 90]);
+        expect(last.loads).toHaveLength(2);
+      },
+      { timeout: 8_000 },
+    );
   });
 
   it('when the inputs change quickly then one preview is asked for once they settle', async () => {
@@ -228,11 +231,10 @@ describe('MovePlanner', () => {
       <MovePlanner choices={choices} units="metric" defaultNight="2027-01-26" onSaved={vi.fn()} />,
     );
     await user.click(screen.getByLabelText(/Quail Run Block 3/));
-    await user.type(
-      await screen.findByLabelText('Colonies from Bobcat Wash, Spring splits'),
-      '123',
-    );
-    await screen.findByRole('table', { name: 'Load sheet' });
+    const colonies = await screen.findByLabelText('Colonies from Bobcat Wash, Spring splits');
+    // Three keystrokes in one burst (synchronous, so a busy machine cannot spread them out).
+    for (const value of ['1', '12', '123']) fireEvent.change(colonies, { target: { value } });
+    await screen.findByRole('table', { name: 'Load sheet' }, { timeout: 8_000 });
     const previews = requests.filter((r) => r.url === '/api/moves/preview');
     expect(previews).toHaveLength(1);
     expect((previews[0].body as { origins: Array<{ colonies: number }> }).origins[0].colonies).toBe(
