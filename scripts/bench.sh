@@ -10,3 +10,5 @@ echo "== Move planning (bench/moves.bench.ts)"
 node --import tsx bench/moves.bench.ts
 echo "== Map tiles (bench/tiles.bench.ts)"
 node --import tsx bench/tiles.bench.ts
+echo "== Browser: planner page, Tonight offline, Atlas render (scripts/bench-browser.sh)"
+if [ -x /usr/bin/chromium ]; then bash scripts/bench-browser.sh; else echo "skipped: no /usr/bin/chromium"; fi

@@ -15,6 +15,7 @@ import { colonyLotsRouter } from './modules/colony-lots/colony-lots.router';
 import { ledgerRouter } from './modules/ledger/ledger.router';
 import { usersRouter } from './modules/users/users.router';
 import { samplesRouters } from './modules/samples/samples.router';
+import { portalRouter } from './modules/portal/portal.router';
 import { calcRouter } from './modules/calc/calc.router';
 import { cropsRouter } from './modules/calc/crops.router';
 import type { RoadDistance } from './modules/calc/routing-service';
@@ -56,6 +57,7 @@ export function apiRouters(
     ['/ledger', ledgerRouter(db)],
     ['/users', usersRouter(db)],
     ...samplesRouters(db),
+    ['/portal', portalRouter(db)],
     ['/calc', calcRouter(roads)],
     ['/crops', cropsRouter()],
     ['/invoices', invoicesRouter({ db, env, jobs })],

@@ -1,14 +1,21 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, type NonIndexRouteObject, type RouteObject } from 'react-router-dom';
+import {
+  createBrowserRouter,
+  redirect,
+  type NonIndexRouteObject,
+  type RouteObject,
+} from 'react-router-dom';
 import { RouteError } from '@/components/errors/route-error';
 import { PageSkeleton } from '@/components/ui/skeleton';
+import { paths } from '@/config/paths';
 import { setUnauthenticatedHandler } from '@/lib/api-client';
 import { sessionKeys } from '@/lib/auth';
 import * as appRoot from './routes/app-root';
 import * as home from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import * as signIn from './routes/sign-in';
-import * as yourContracts from './routes/your-contracts';
+import * as portal from './routes/portal/portal';
+import * as sprayNotices from './routes/spray-notices/spray-notices';
 import { atlasRoute } from './routes/atlas/atlas';
 import * as yards from './routes/yards/yards';
 import * as yard from './routes/yards/yard';
@@ -42,6 +49,10 @@ import * as movePrint from './routes/moves/move-print';
 import * as calendarFeed from './routes/moves/calendar-feed';
 import * as tonight from './routes/tonight/tonight';
 import * as season from './routes/season/season';
+import * as invoices from './routes/invoices/invoices';
+import * as invoice from './routes/invoices/invoice';
+import * as invoicePrint from './routes/invoices/invoice-print';
+import * as receivables from './routes/receivables/receivables';
 
 const errorElement = <RouteError />;
 
@@ -101,7 +112,18 @@ export function routes(queryClient: QueryClient): RouteObject[] {
             page('moves/:moveId/print', movePrint.loader, <movePrint.MovePrintRoute />),
             page('tonight', tonight.loader, <tonight.TonightRoute />),
             page('season', season.loader, <season.SeasonRoute />),
-            page('your-contracts', yourContracts.loader, <yourContracts.YourContractsRoute />),
+            page('invoices', invoices.loader, <invoices.InvoicesRoute />),
+            page('invoices/:invoiceId', invoice.loader, <invoice.InvoiceRoute />),
+            page(
+              'invoices/:invoiceId/print',
+              invoicePrint.loader,
+              <invoicePrint.InvoicePrintRoute />,
+            ),
+            page('receivables', receivables.loader, <receivables.ReceivablesRoute />),
+            page('portal', portal.loader, <portal.PortalRoute />),
+            // The grower's old home; bookmarks and e-mails still point here.
+            { path: 'your-contracts', loader: () => redirect(paths.portal) },
+            page('spray-notices', sprayNotices.loader, <sprayNotices.SprayNoticesRoute />),
             {
               ...page('settings', settingsLayout.loader, <settingsLayout.SettingsLayoutRoute />),
               children: [

@@ -20,6 +20,8 @@ export const paths = {
   contract: (id: string) => `/contracts/${id}`,
   contractEdit: (id: string) => `/contracts/${id}/edit`,
   yourContracts: '/your-contracts',
+  portal: '/portal',
+  sprayNotices: '/spray-notices',
   settings: '/settings',
   settingsUnits: '/settings/units',
   settingsFleet: '/settings/fleet',
@@ -35,4 +37,8 @@ export const paths = {
   movePrint: (id: string) => `/moves/${id}/print`,
   tonight: '/tonight',
   season: '/season',
+  invoices: '/invoices',
+  invoice: (id: string) => `/invoices/${id}`,
+  invoicePrint: (id: string) => `/invoices/${id}/print`,
+  receivables: '/receivables',
 } as const;

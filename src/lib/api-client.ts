@@ -47,6 +47,8 @@ export function setUnauthenticatedHandler(handler: UnauthenticatedHandler) {
 
 interface RequestOptions {
   body?: unknown;
+  /** A multipart body; the browser sets its Content-Type with the boundary. */
+  form?: FormData;
   query?: Record<string, string | number | boolean | null | undefined>;
   signal?: AbortSignal;
 }
@@ -95,7 +97,7 @@ async function request<T>(
   const unsafe = method !== 'GET' && method !== 'HEAD';
   if (unsafe && !csrfToken) await fetchToken();
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (options.body !== undefined && !options.form) headers['Content-Type'] = 'application/json';
   if (unsafe && csrfToken) headers['X-CSRF-Token'] = csrfToken;
 
   let response: Response;
@@ -104,7 +106,7 @@ async function request<T>(
       method,
       headers,
       credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body)),
       signal: options.signal,
     });
   } catch (cause) {
@@ -136,9 +138,11 @@ async function request<T>(
 
 /** The JSON API under /api: same-origin cookies, CSRF header on writes, typed errors. */
 export const api = {
-  get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) =>
+  get: <T>(path: string, options?: Omit<RequestOptions, 'body' | 'form'>) =>
     request<T>('GET', path, options),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, { body }),
+  /** Posts multipart form data (file uploads) with the CSRF header and no JSON Content-Type. */
+  postForm: <T>(path: string, form: FormData) => request<T>('POST', path, { form }),
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, { body }),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, { body }),
   delete: <T>(path: string) => request<T>('DELETE', path),

@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { NavLink, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import type { Role } from '@shared/schemas/users';
 import { paths } from '@/config/paths';
+import { NotificationsIndicator } from '@/features/notifications/components/notifications-indicator';
 import { useSignOut, useUser } from '@/lib/auth';
 import { Button } from '../ui/button';
 import { cx } from '../ui/cx';
@@ -26,6 +27,9 @@ export function navigationFor(role: Role): NavItem[] {
         { to: paths.moves, label: 'Moves' },
         { to: paths.season, label: 'Season' },
         { to: paths.tonight, label: 'Tonight' },
+        { to: paths.sprayNotices, label: 'Spray notices' },
+        { to: paths.invoices, label: 'Invoices' },
+        ...(role === 'owner' ? [{ to: paths.receivables, label: 'Receivables' }] : []),
         { to: paths.settings, label: 'Settings' },
       ];
     case 'crew':
@@ -36,10 +40,11 @@ export function navigationFor(role: Role): NavItem[] {
         { to: paths.atlas, label: 'Atlas' },
         { to: paths.yards, label: 'Yards' },
         { to: paths.contracts, label: 'Contracts' },
+        { to: paths.sprayNotices, label: 'Spray notices' },
         { to: paths.settings, label: 'Settings' },
       ];
     case 'grower':
-      return [{ to: paths.yourContracts, label: 'Your contracts' }];
+      return [{ to: paths.portal, label: 'Your orchards', alsoActive: [paths.yourContracts] }];
   }
 }
 
@@ -72,7 +77,7 @@ export function AppLayout({ children }: { children: ReactNode }) {
     });
 
   const links = (
-    <ul className="flex flex-col gap-1 md:flex-row md:items-center">
+    <ul className="flex flex-col gap-1 md:flex-row md:flex-wrap md:items-center">
       {items.map((item) => (
         <li key={item.to}>
           <NavLink
@@ -102,17 +107,17 @@ export function AppLayout({ children }: { children: ReactNode }) {
         Skip to content
       </a>
       <header className="border-b border-dusk-700 bg-dusk-950 print:hidden">
-        <div className="mx-auto flex max-w-6xl items-center justify-between gap-3 px-4 py-3">
-          <div className="flex items-center gap-6">
-            <span className="flex flex-col leading-tight">
-              <span className="text-lg font-semibold text-ember-300">Duskhaul</span>
-              <span className="text-xs text-dusk-300">{user.operationName}</span>
-            </span>
-            <nav aria-label="Main" className="hidden md:block">
-              {links}
-            </nav>
-          </div>
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+          <span className="flex flex-col leading-tight">
+            <span className="text-lg font-semibold text-ember-300">Duskhaul</span>
+            <span className="text-xs text-dusk-300">{user.operationName}</span>
+          </span>
+          {/* Its own row under the brand and the user, so every screen fits at any width. */}
+          <nav aria-label="Main" className="order-last hidden w-full md:block">
+            {links}
+          </nav>
           <div className="hidden items-center gap-3 md:flex">
+            <NotificationsIndicator enabled={user.role !== 'grower'} />
             <span className="text-right text-sm leading-tight">
               <span className="block text-dusk-100">{user.name}</span>
               <span className="block text-dusk-300">{roleName[user.role]}</span>
@@ -137,6 +142,7 @@ export function AppLayout({ children }: { children: ReactNode }) {
             <nav aria-label="Main" className="pt-3">
               {links}
             </nav>
+            <NotificationsIndicator enabled={user.role !== 'grower'} />
             <div className="mt-3 flex items-center justify-between gap-3 border-t border-dusk-700 pt-3">
               <span className="text-sm">
                 {user.name} · <span className="text-dusk-300">{roleName[user.role]}</span>

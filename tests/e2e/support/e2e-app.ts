@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import type { AddressInfo } from 'node:net';
+import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
@@ -14,11 +14,18 @@ import { seedDemo } from '../../../server/db/seed';
 export const demoPassword = 'duskhaul-demo';
 export const screenshotDir = path.resolve('test-output/screenshots');
 
+export interface E2eOptions {
+  /** Variables laid over process.env for this app (e.g. the fake payment provider's). */
+  env?: Record<string, string>;
+  /** Listen on this port instead of a free one, when APP_URL must be known up front. */
+  port?: number;
+}
+
 /**
  * The built client and the API on a free port, over a database of its own holding the demo
  * scenario, and a headless Debian Chromium that records every request it makes.
  */
-export async function startE2e() {
+export async function startE2e(options: E2eOptions = {}) {
   const base = new URL(process.env.DATABASE_URL!);
   const name = `duskhaul_e2e_${randomBytes(4).toString('hex')}`;
   const admin = new pg.Client({ connectionString: base.toString() });
@@ -37,8 +44,12 @@ export async function startE2e() {
     DATABASE_URL: url.toString(),
     NODE_ENV: 'test',
     CLIENT_DIST: 'dist',
+    ...options.env,
   });
-  const server = createApp({ db, env, log: () => undefined }).listen(0, '127.0.0.1');
+  const server = createApp({ db, env, log: () => undefined }).listen(
+    options.port ?? 0,
+    '127.0.0.1',
+  );
   await new Promise((resolve) => server.once('listening', resolve));
   const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
@@ -86,6 +97,15 @@ export async function startE2e() {
 }
 
 export type E2e = Awaited<ReturnType<typeof startE2e>>;
+
+/** A port free on loopback right now (for an app whose own address must be configured). */
+export async function freePort(): Promise<number> {
+  const probe = createServer();
+  await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
+  const { port } = probe.address() as AddressInfo;
+  await new Promise((resolve) => probe.close(resolve));
+  return port;
+}
 
 /** Signs in through the sign-in page as a person would. */
 export async function signIn(page: Page, origin: string, email: string, password = demoPassword) {

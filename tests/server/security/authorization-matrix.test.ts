@@ -119,6 +119,7 @@ const matrix: Record<string, Row> = {
   'POST /api/sites/:id/boundary': [401, 200, 200, 403, 403, 403, 404, 401],
   'PATCH /api/sites/:id/drops': [401, 200, 200, 403, 403, 403, 404, 401],
   'GET /api/atlas': [401, 200, 200, 200, 403, 403, 200, 401],
+  'GET /api/portal/placements': [401, 403, 403, 403, 200, 200, 403, 401],
   'GET /api/crops': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/hive-weight': [401, 200, 200, 200, 403, 403, 200, 401],
   'POST /api/calc/load-plan': [401, 200, 200, 200, 403, 403, 200, 401],

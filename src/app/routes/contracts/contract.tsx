@@ -14,6 +14,7 @@ import { getContractQueryOptions } from '@/features/contracts/api/get-contract';
 import { getContractHistoryQueryOptions } from '@/features/contracts/api/get-contract-history';
 import { ContractHistory } from '@/features/contracts/components/contract-history';
 import { ContractSummary } from '@/features/contracts/components/contract-summary';
+import { DocumentsPanel } from '@/features/documents/components/documents-panel';
 import { getGrowersQueryOptions } from '@/features/growers/api/get-growers';
 import { getSitesQueryOptions } from '@/features/sites/api/get-sites';
 import { canPlan, useUser } from '@/lib/auth';
@@ -83,6 +84,8 @@ export function ContractRoute() {
               <p className="whitespace-pre-line">{contract.internalNotes}</p>
             </Section>
           )}
+          {/* Contract documents carry prices and terms: crew never see them. */}
+          {user.role !== 'crew' && <DocumentsPanel attachedKind="contract" attachedId={id} />}
         </div>
         {planner && (
           <Section title="History">

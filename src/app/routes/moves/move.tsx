@@ -6,6 +6,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { Facts, PageHeader, Section } from '@/components/ui/page-header';
 import { TableSkeleton } from '@/components/ui/skeleton';
+import { DocumentsPanel } from '@/features/documents/components/documents-panel';
 import { getLoadSheetQueryOptions } from '@/features/moves/api/get-load-sheet';
 import { getMoveQueryOptions } from '@/features/moves/api/get-move';
 import { LoadSheetTable } from '@/features/moves/components/load-sheet-table';
@@ -95,6 +96,7 @@ export function MoveRoute() {
               </Section>
             </>
           )}
+          <DocumentsPanel attachedKind="move" attachedId={id} />
         </div>
         <div className="flex flex-col gap-6">
           <Section title="Crew records">

@@ -8,6 +8,7 @@ import { Dialog } from '@/components/ui/dialog';
 import { FormAlert } from '@/components/ui/form-alert';
 import { Facts, PageHeader, Section } from '@/components/ui/page-header';
 import { useToast } from '@/components/ui/toast';
+import { DocumentsPanel } from '@/features/documents/components/documents-panel';
 import { getGrowersQueryOptions } from '@/features/growers/api/get-growers';
 import { getColonyCountsQueryOptions } from '@/features/ledger/api/get-colony-counts';
 import { ColonyCountsTable } from '@/features/ledger/components/colony-counts-table';
@@ -105,6 +106,7 @@ export function SiteRoute() {
               <p className="whitespace-pre-line">{site.notes}</p>
             </Section>
           )}
+          <DocumentsPanel attachedKind="site" attachedId={id} />
         </div>
         <Section title="Boundary">
           {site.boundary ? (

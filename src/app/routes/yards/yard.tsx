@@ -9,6 +9,7 @@ import { Facts, PageHeader, Section } from '@/components/ui/page-header';
 import { TableSkeleton } from '@/components/ui/skeleton';
 import { useToast } from '@/components/ui/toast';
 import { FormAlert } from '@/components/ui/form-alert';
+import { DocumentsPanel } from '@/features/documents/components/documents-panel';
 import { getColonyCountsQueryOptions } from '@/features/ledger/api/get-colony-counts';
 import { getLedgerEntriesQueryOptions } from '@/features/ledger/api/get-ledger-entries';
 import { ColonyCountsTable } from '@/features/ledger/components/colony-counts-table';
@@ -171,6 +172,7 @@ export function YardRoute() {
               <LedgerHistory entries={history.data.items} placeId={yard.id} lotNames={lotNames} />
             )}
           </Section>
+          <DocumentsPanel attachedKind="yard" attachedId={yard.id} />
         </div>
         <div className="flex flex-col gap-6">
           <Section title="Yard">
