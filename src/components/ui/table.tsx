@@ -34,6 +34,15 @@ export function useClientTable<T>(
 ) {
   const [sorting, setSorting] = useState<SortingState>(options.initialSorting ?? []);
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: options.pageSize ?? 25 });
+  // Back to the first page when the filters change. TanStack's own autoResetPageIndex resets on
+  // every new `data` array, which re-rendered the page endlessly and starved route transitions
+  // (a click on another screen changed the URL but never showed the screen).
+  const filterKey = JSON.stringify([options.globalFilter ?? '', options.columnFilters ?? []]);
+  const [seenFilterKey, setSeenFilterKey] = useState(filterKey);
+  if (seenFilterKey !== filterKey) {
+    setSeenFilterKey(filterKey);
+    setPagination((p) => (p.pageIndex === 0 ? p : { ...p, pageIndex: 0 }));
+  }
   // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns new functions each render by design
   return useReactTable<T>({
     data,
@@ -46,7 +55,7 @@ export function useClientTable<T>(
     },
     onSortingChange: setSorting,
     onPaginationChange: setPagination,
-    autoResetPageIndex: true,
+    autoResetPageIndex: false,
     globalFilterFn: 'includesString',
     ...(options.searchColumns
       ? { getColumnCanGlobalFilter: (col) => options.searchColumns!.includes(col.id) }
