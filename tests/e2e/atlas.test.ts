@@ -119,6 +119,24 @@ describe('Atlas in the browser', () => {
     await screenshot(page, 'atlas-drawn-block');
   });
 
+  it('when a planner asks to plan a move to the selected block then the planner opens with it as the destination', async () => {
+    const panel = page.getByRole('complementary');
+    await panel.getByRole('link', { name: 'Plan a move to this block' }).click();
+    await page.waitForURL(/\/moves\/new\?to=/);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByLabel(/Unmapped Block 12/)
+            .first()
+            .isChecked(),
+        { timeout: 10_000 },
+      )
+      .toBe(true);
+    await page.goBack();
+    await map().waitFor();
+  });
+
   it('when the night style is switched on then the map takes the dim red-on-black look', async () => {
     await page.getByRole('checkbox', { name: /night style/i }).check();
     await expect.poll(() => page.locator('.atlas-map--night').count()).toBe(1);

@@ -17,7 +17,7 @@ export const loader =
     return null;
   };
 
-/** /moves/new (?night=YYYY-MM-DD): plan a night's move. */
+/** /moves/new (?night=YYYY-MM-DD&to=siteId): plan a night's move. */
 export function MoveNewRoute() {
   const user = useUser();
   const choices = usePlannerChoices();
@@ -35,6 +35,7 @@ export function MoveNewRoute() {
         choices={choices}
         units={user.units}
         defaultNight={params.get('night') ?? todayIso()}
+        defaultDestinationSiteId={params.get('to')}
         onCancel={() => navigate(paths.moves)}
         onSaved={(move) => {
           toast.show(`${move.name} saved as a draft.`);

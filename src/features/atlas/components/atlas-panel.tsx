@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import type { Units } from '@shared/schemas/users';
 import type { CropKey } from '@shared/schemas/sites';
 import { paths } from '@/config/paths';
+import { canPlan, useUser } from '@/lib/auth';
 import { cropName } from '@/lib/crops';
 import { formatArea, formatCount, formatDate, formatDateTime, formatDollars } from '@/lib/units';
 import type { AtlasNextMove, AtlasSummary } from '../api/types';
@@ -169,6 +170,7 @@ function SiteDetails({
   units: Units;
   tools?: ReactNode;
 }) {
+  const canPlanMoves = canPlan(useUser());
   const site = atlas.sites.features.find((f) => f.properties.id === id)?.properties;
   if (!site) return null;
   const contract = site.contract;
@@ -223,6 +225,7 @@ function SiteDetails({
       </section>
       {tools}
       <Link to={paths.site(site.id)}>Open the site record</Link>
+      {canPlanMoves && <Link to={`${paths.moveNew}?to=${site.id}`}>Plan a move to this block</Link>}
     </>
   );
 }

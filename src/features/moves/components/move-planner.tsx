@@ -30,6 +30,8 @@ interface Props {
   /** The saved move when editing. */
   move?: Move;
   defaultNight: string;
+  /** A site to start with as the destination (from the Atlas's "plan a move to this block"). */
+  defaultDestinationSiteId?: string | null;
   onSaved: (move: Move) => void;
   /** Fetches the move as it is now (after a 409); returns its version. */
   onReload?: () => Promise<number | undefined>;
@@ -42,12 +44,13 @@ export function MovePlanner({
   units,
   move,
   defaultNight,
+  defaultDestinationSiteId,
   onSaved,
   onReload,
   onCancel,
 }: Props) {
   const [draft, setDraft] = useState<MoveDraft>(() =>
-    move ? draftFromMove(move) : emptyDraft(defaultNight),
+    move ? draftFromMove(move) : emptyDraft(defaultNight, defaultDestinationSiteId),
   );
   const [baseVersion, setBaseVersion] = useState(move?.version ?? 0);
   const [reloading, setReloading] = useState(false);

@@ -19,11 +19,11 @@ export interface MoveDraft {
 }
 
 /** Common practice for a semi: two hours at the yards, 85 km/h on the road including stops. */
-export const emptyDraft = (nightOf: string): MoveDraft => ({
+export const emptyDraft = (nightOf: string, destinationSiteId?: string | null): MoveDraft => ({
   name: '',
   nightOf,
   destinationKind: 'site',
-  destinationIds: [],
+  destinationIds: destinationSiteId ? [destinationSiteId] : [],
   contractId: null,
   origins: [],
   loads: [],
