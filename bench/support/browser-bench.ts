@@ -50,7 +50,8 @@ export async function startBench() {
     process.exit(0);
   }
   const { startE2e } = await import('../../tests/e2e/support/e2e-app');
-  return startE2e();
+  // The offline bench measures the service worker's cache, so it must be allowed to run.
+  return startE2e({ serviceWorkers: 'allow' });
 }
 
 export type Bench = Awaited<ReturnType<typeof startBench>>;

@@ -19,6 +19,8 @@ export interface E2eOptions {
   env?: Record<string, string>;
   /** Listen on this port instead of a free one, when APP_URL must be known up front. */
   port?: number;
+  /** Let the app's service worker run (benchmarks of the offline cache); tests block it. */
+  serviceWorkers?: 'allow' | 'block';
 }
 
 /**
@@ -57,6 +59,9 @@ export async function startE2e(options: E2eOptions = {}) {
   const browser: BrowserContext = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
+    // The app's service worker answers from its cache when the network is slow; on a busy machine
+    // that served a stale session after sign-out. Tests talk to the server itself.
+    serviceWorkers: options.serviceWorkers ?? 'block',
     args: [
       '--no-sandbox',
       '--disable-gpu',
