@@ -107,11 +107,19 @@ export const dropPlacement = z.strictObject({
   colonies: z.number().int().min(0).max(100_000),
 });
 
+const palletCount = z.number().int('A whole number.').min(0).max(10_000);
+
+/** Pallets loaded at one pick-up stop of a truck: a yard and the lot taken from it. */
+export const stopPalletCount = z.strictObject({ yardId: id, lotId: id, pallets: palletCount });
+export type StopPalletCount = z.infer<typeof stopPalletCount>;
+
 const colonyCount = z.number().int('A whole number.').min(0).max(100_000);
 
 /** What the crew records on one truck's load; every field optional, the load's version required. */
 export const loadRecordFields = z.strictObject({
-  palletsLoaded: z.number().int('A whole number.').min(0).max(10_000).nullish(),
+  palletsLoaded: palletCount.nullish(),
+  /** Per pick-up stop; when given, palletsLoaded is their sum (or must equal it). */
+  palletsByStop: z.array(stopPalletCount).max(100).nullish(),
   coloniesPlaced: colonyCount.nullish(),
   coloniesLeftBehind: colonyCount.nullish(),
   coloniesLost: colonyCount.nullish(),

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { screenshot, signIn, startE2e, type E2e } from './support/e2e-app';
 
 let e2e: E2e;
@@ -7,6 +8,14 @@ beforeAll(async () => {
   e2e = await startE2e();
 });
 afterAll(() => e2e?.close());
+
+/** Signs out from the header and checks the server no longer knows the browser. */
+async function signOutAndCheck(page: Page) {
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await page.waitForURL(/\/sign-in/);
+  const session = await page.evaluate(async () => (await fetch('/api/session')).json());
+  expect(session.user).toBeNull();
+}
 
 describe('foundation in the browser', () => {
   it('when the planner signs in then the yards of the demo operation are listed', async () => {
@@ -25,6 +34,7 @@ describe('foundation in the browser', () => {
     );
     expect(await table.getByText(name).count()).toBeGreaterThan(0);
     await screenshot(page, 'foundation-planner-yards');
+    await signOutAndCheck(page);
     await page.close();
   });
 
@@ -49,6 +59,7 @@ describe('foundation in the browser', () => {
     expect(ownContracts[0].n).toBeGreaterThan(0);
     expect(await list.count()).toBe(ownContracts[0].n);
     await screenshot(page, 'foundation-grower-contracts');
+    await signOutAndCheck(page);
     await page.close();
   });
 

@@ -8,6 +8,13 @@ export interface DropPlacementRecord {
   colonies: number;
 }
 
+/** Pallets the crew loaded at one pick-up stop (a yard and the lot taken from it). */
+export interface StopPalletCount {
+  yardId: string;
+  lotId: string;
+  pallets: number;
+}
+
 /** One truck's part of a move: planned and recorded counts. */
 @Entity('move_loads')
 export class MoveLoad extends TenantRecord {
@@ -21,6 +28,8 @@ export class MoveLoad extends TenantRecord {
   /** This truck's page of the computed plan (pick-ups, weights, times), saved with the move. */
   @Column({ type: 'jsonb', nullable: true }) plan: Record<string, unknown> | null;
   @Column({ type: 'integer', nullable: true }) palletsLoaded: number | null;
+  /** The same count per pick-up stop; `palletsLoaded` is their sum when these are given. */
+  @Column({ type: 'jsonb', nullable: true }) palletsByStop: StopPalletCount[] | null;
   @Column({ type: 'integer', nullable: true }) coloniesPlaced: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLeftBehind: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLost: number | null;

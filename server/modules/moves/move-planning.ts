@@ -20,6 +20,7 @@ export function presentLoad(l: MoveLoad) {
     coloniesPlanned: l.coloniesPlanned,
     plan: l.plan,
     palletsLoaded: l.palletsLoaded,
+    palletsByStop: l.palletsByStop,
     coloniesPlaced: l.coloniesPlaced,
     coloniesLeftBehind: l.coloniesLeftBehind,
     coloniesLost: l.coloniesLost,

@@ -3,7 +3,8 @@ import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
 import type { loadRecordFields, moveWeightsFields } from '../../../shared/schemas/moves';
-import { MoveLoad } from './move-load.entity';
+import { MoveLoad, type StopPalletCount } from './move-load.entity';
+import { MoveOrigin } from './move-origin.entity';
 import { presentLoad } from './move-planning';
 import { moves } from './moves.service';
 
@@ -33,6 +34,42 @@ async function loadOf(tx: EntityManager, actor: Actor, moveId: string, loadId: s
   return load;
 }
 
+/** The pick-up stops (yard and lot) of one load: from its saved plan, else the move's origins. */
+async function stopsOf(tx: EntityManager, actor: Actor, moveId: string, load: MoveLoad) {
+  const planned = (load.plan as { stops?: Array<{ yardId: string; lotId: string }> } | null)?.stops;
+  const stops =
+    planned ??
+    (await tx.getRepository(MoveOrigin).findBy({ moveId, operationId: actor.operationId }));
+  return new Set(stops.map((s) => `${s.yardId}:${s.lotId}`));
+}
+
+/** Checks per-stop pallet counts against the load's stops and returns their sum. */
+async function palletsByStopTotal(
+  tx: EntityManager,
+  actor: Actor,
+  moveId: string,
+  load: MoveLoad,
+  counts: StopPalletCount[],
+) {
+  const stops = await stopsOf(tx, actor, moveId, load);
+  const seen = new Set<string>();
+  counts.forEach((c, i) => {
+    const stop = `${c.yardId}:${c.lotId}`;
+    if (!stops.has(stop)) {
+      throw AppError.validation([
+        { field: `palletsByStop.${i}`, message: 'Not a pick-up stop of this truck.' },
+      ]);
+    }
+    if (seen.has(stop)) {
+      throw AppError.validation([
+        { field: `palletsByStop.${i}`, message: 'This stop is counted twice.' },
+      ]);
+    }
+    seen.add(stop);
+  });
+  return counts.reduce((sum, c) => sum + c.pallets, 0);
+}
+
 /** A 409 that carries the current load, so the device can show what it conflicts with. */
 function staleLoad(current: MoveLoad): AppError {
   return new AppError(
@@ -56,6 +93,17 @@ export const moveRecords = {
   ) {
     const move = await recordableMove(tx, actor, moveId);
     const load = await loadOf(tx, actor, moveId, loadId);
+    let palletsLoaded = fields.palletsLoaded;
+    const palletsByStop = fields.palletsByStop ?? undefined;
+    if (palletsByStop) {
+      const sum = await palletsByStopTotal(tx, actor, moveId, load, palletsByStop);
+      if (palletsLoaded === undefined || palletsLoaded === null) palletsLoaded = sum;
+      else if (palletsLoaded !== sum) {
+        throw AppError.validation([
+          { field: 'palletsLoaded', message: `The stops add up to ${sum}, not ${palletsLoaded}.` },
+        ]);
+      }
+    }
     const placements = fields.placements ?? undefined;
     let coloniesPlaced = fields.coloniesPlaced;
     if (placements) {
@@ -78,7 +126,14 @@ export const moveRecords = {
       }
     }
     const set: Record<string, unknown> = {
-      palletsLoaded: fields.palletsLoaded,
+      palletsLoaded,
+      // A bare truck total replaces any per-stop counts it no longer agrees with.
+      palletsByStop:
+        fields.palletsByStop !== undefined
+          ? fields.palletsByStop
+          : fields.palletsLoaded !== undefined
+            ? null
+            : undefined,
       coloniesPlaced,
       coloniesLeftBehind: fields.coloniesLeftBehind,
       coloniesLost: fields.coloniesLost,

@@ -1,11 +1,12 @@
 import { useState, type ReactNode } from 'react';
-import { NavLink, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { NavLink, useLocation, useNavigation } from 'react-router-dom';
 import type { Role } from '@shared/schemas/users';
 import { paths } from '@/config/paths';
 import { NotificationsIndicator } from '@/features/notifications/components/notifications-indicator';
-import { useSignOut, useUser } from '@/lib/auth';
+import { useUser } from '@/lib/auth';
 import { Button } from '../ui/button';
 import { cx } from '../ui/cx';
+import { SignOutButton } from './sign-out-button';
 
 interface NavItem {
   to: string;
@@ -58,8 +59,6 @@ const roleName: Record<Role, string> = {
 /** The signed-in shell: brand, navigation by role, who is signed in, sign-out. */
 export function AppLayout({ children }: { children: ReactNode }) {
   const user = useUser();
-  const signOut = useSignOut();
-  const navigate = useNavigate();
   const location = useLocation();
   const navigation = useNavigation();
   const [menuOpen, setMenuOpen] = useState(false);
@@ -70,11 +69,6 @@ export function AppLayout({ children }: { children: ReactNode }) {
     setMenuOpen(false);
   }
   const items = navigationFor(user.role);
-
-  const handleSignOut = () =>
-    signOut.mutate(undefined, {
-      onSettled: () => navigate(paths.signIn(), { replace: true }),
-    });
 
   const links = (
     <ul className="flex flex-col gap-1 md:flex-row md:flex-wrap md:items-center">
@@ -122,9 +116,7 @@ export function AppLayout({ children }: { children: ReactNode }) {
               <span className="block text-dusk-100">{user.name}</span>
               <span className="block text-dusk-300">{roleName[user.role]}</span>
             </span>
-            <Button variant="secondary" size="sm" onClick={handleSignOut} busy={signOut.isPending}>
-              Sign out
-            </Button>
+            <SignOutButton />
           </div>
           <Button
             variant="secondary"
@@ -147,14 +139,7 @@ export function AppLayout({ children }: { children: ReactNode }) {
               <span className="text-sm">
                 {user.name} · <span className="text-dusk-300">{roleName[user.role]}</span>
               </span>
-              <Button
-                variant="secondary"
-                size="sm"
-                onClick={handleSignOut}
-                busy={signOut.isPending}
-              >
-                Sign out
-              </Button>
+              <SignOutButton />
             </div>
           </div>
         )}

@@ -1,4 +1,4 @@
-import type { MoveStatus } from '@shared/schemas/moves';
+import type { MoveStatus, PreRollCheck, StopPalletCount } from '@shared/schemas/moves';
 
 /** Where a hive weight came from (a weighing, or computed from the hive setup). */
 export interface WeightSource {
@@ -154,11 +154,12 @@ export interface MoveLoad {
   coloniesPlanned: number | null;
   plan: PlannedTruck | null;
   palletsLoaded: number | null;
+  palletsByStop: StopPalletCount[] | null;
   coloniesPlaced: number | null;
   coloniesLeftBehind: number | null;
   coloniesLost: number | null;
   placements: DropPlacement[] | null;
-  preRollCheck: Record<string, unknown> | null;
+  preRollCheck: PreRollCheck | null;
   notes: string;
   version: number;
 }
@@ -233,11 +234,12 @@ export interface LoadSheetPage extends Omit<PlannedTruck, 'stops'> {
   stops: LoadSheetStop[];
   recorded: {
     palletsLoaded: number | null;
+    palletsByStop: StopPalletCount[] | null;
     coloniesPlaced: number | null;
     coloniesLeftBehind: number | null;
     coloniesLost: number | null;
     placements: DropPlacement[] | null;
-    preRollCheck: Record<string, unknown> | null;
+    preRollCheck: PreRollCheck | null;
     notes: string;
     version: number;
   };

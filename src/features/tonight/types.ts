@@ -1,4 +1,10 @@
-import type { MoveStatus, SyncKind, SyncOutcome } from '@shared/schemas/moves';
+import type {
+  MoveStatus,
+  PreRollCheck,
+  StopPalletCount,
+  SyncKind,
+  SyncOutcome,
+} from '@shared/schemas/moves';
 
 /** A drop's placement: colonies set down at one destination (and drop). */
 export interface Placement {
@@ -10,10 +16,13 @@ export interface Placement {
 /** What the crew records on a load. */
 export interface LoadRecord {
   palletsLoaded: number | null;
+  /** Per pick-up stop; when present the truck's total is their sum. */
+  palletsByStop: StopPalletCount[] | null;
   coloniesPlaced: number | null;
   coloniesLeftBehind: number | null;
   coloniesLost: number | null;
   placements: Placement[] | null;
+  preRollCheck: PreRollCheck | null;
   notes: string;
   version: number;
 }

@@ -9,6 +9,7 @@ import { TableSkeleton } from '@/components/ui/skeleton';
 import { DocumentsPanel } from '@/features/documents/components/documents-panel';
 import { getLoadSheetQueryOptions } from '@/features/moves/api/get-load-sheet';
 import { getMoveQueryOptions } from '@/features/moves/api/get-move';
+import { CrewRecordsTable } from '@/features/moves/components/crew-records-table';
 import { LoadSheetTable } from '@/features/moves/components/load-sheet-table';
 import { MoveStatusActions } from '@/features/moves/components/move-status-actions';
 import { MoveStatusBadge } from '@/features/moves/components/move-status';
@@ -90,6 +91,9 @@ export function MoveRoute() {
                   units={user.units}
                   destinationZone={sheet.data.timeline.window?.destination.timeZone}
                 />
+              </Section>
+              <Section title="Crew records by truck and yard">
+                <CrewRecordsTable pages={sheet.data.pages} />
               </Section>
               <Section title="Timeline">
                 <MoveTimeline timeline={sheet.data.timeline} />

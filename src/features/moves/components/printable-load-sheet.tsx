@@ -1,4 +1,5 @@
 import type { Units } from '@shared/schemas/users';
+import { preRollItems } from '@shared/domain/pre-roll-check';
 import { formatCount, formatDate, formatWeight } from '@/lib/units';
 import { formatLocalTime } from '../lib/local-time';
 import type { LoadSheet, LoadSheetPage } from '../types';
@@ -137,8 +138,11 @@ function TruckPage({
         </div>
       )}
       <p className="text-sm">
-        Pre-roll check: nets clipped ☐ straps tight ☐ pallets clean ☐ water aboard ☐ certificate in
-        cab ☐ · Placed: ______ colonies · left behind ______ · lost ______
+        Pre-roll check: {preRollItems.map(({ label }) => `☐ ${label.toLowerCase()}`).join('  ')}
+      </p>
+      <p className="text-sm">
+        Pallets loaded per yard: {page.stops.map((s) => `${s.yardName} ______`).join(' · ')} ·
+        Placed: ______ colonies · left behind ______ · lost ______
       </p>
     </section>
   );

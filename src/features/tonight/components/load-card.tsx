@@ -1,5 +1,7 @@
 import { useState } from 'react';
 import type { Units } from '@shared/schemas/users';
+import type { PreRollCheck } from '@shared/schemas/moves';
+import { preRollItems, preRollMissing, type PreRollItem } from '@shared/domain/pre-roll-check';
 import { weightToKg, weightUnit } from '@/lib/units';
 import type { NewChange } from '../lib/offline-queue';
 import type { TonightLoad, TonightMove } from '../types';
@@ -14,6 +16,10 @@ interface Props {
 
 /** "20:34 (UTC-06:00)": the wall clock of the place, as the API wrote it. */
 const clock = (iso: string | null) => (iso ? `${iso.slice(11, 16)} (UTC${iso.slice(19)})` : '—');
+
+/** A moment recorded on the phone, in the phone's own time. */
+const deviceClock = (iso: string) =>
+  new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
 
 const numberOrNull = (text: string) =>
   text.trim() === '' ? null : Math.max(0, Math.floor(Number(text)) || 0);
@@ -30,6 +36,42 @@ export function LoadCard({ move, load, units, onChange }: Props) {
       payload,
       label: `${load.truckName}: ${label}`,
     });
+
+  // Pallets are counted per pick-up stop; a truck total recorded without stops (by the office, or
+  // an older phone) stands for the only stop of a one-stop truck.
+  const byStop = recorded.palletsByStop;
+  const loadedAt = (stop: TonightLoad['stops'][number]) =>
+    byStop?.find((c) => c.yardId === stop.yardId && c.lotId === stop.lotId)?.pallets ??
+    (!byStop && load.stops.length === 1 ? (recorded.palletsLoaded ?? 0) : 0);
+  const loadedTotal = byStop
+    ? byStop.reduce((sum, c) => sum + c.pallets, 0)
+    : (recorded.palletsLoaded ?? 0);
+  const countAt = (index: number, value: number) => {
+    const palletsByStop = load.stops.map((stop, i) => ({
+      yardId: stop.yardId,
+      lotId: stop.lotId,
+      pallets: i === index ? value : loadedAt(stop),
+    }));
+    const palletsLoaded = palletsByStop.reduce((sum, c) => sum + c.pallets, 0);
+    counts(
+      { palletsByStop, palletsLoaded },
+      `${value} ${value === 1 ? 'pallet' : 'pallets'} loaded at ${load.stops[index].yardName}`,
+    );
+  };
+
+  const [check, setCheck] = useState<Record<PreRollItem, boolean>>(
+    () =>
+      Object.fromEntries(
+        preRollItems.map(({ item }) => [item, recorded.preRollCheck?.[item] === true]),
+      ) as Record<PreRollItem, boolean>,
+  );
+  const saveCheck = () => {
+    const preRollCheck: PreRollCheck = { ...check, checkedAt: new Date().toISOString() };
+    const ticked = preRollItems.length - preRollMissing(preRollCheck).length;
+    counts({ preRollCheck }, `pre-roll check, ${ticked} of ${preRollItems.length} ticked`);
+    setSaidSaved('Pre-roll check kept.');
+  };
+  const checkMissing = preRollMissing(recorded.preRollCheck);
 
   const placedAt = (placeId: string) =>
     recorded.placements?.find((p) => p.placeId === placeId)?.colonies ?? null;
@@ -121,25 +163,64 @@ export function LoadCard({ move, load, units, onChange }: Props) {
           {load.pallets} pallets, {load.colonies} colonies planned
         </p>
       </header>
-      <ol className="flex flex-col gap-2">
-        {load.stops.map((stop, i) => (
-          <li key={`${stop.yardId}-${stop.lotId}`} className="border-l-4 tn-line pl-3">
-            <p className="font-semibold">
-              {i + 1}. {stop.yardName} — {stop.pallets} pallets
-            </p>
-            <p className="tn-muted text-sm">{stop.lotName}</p>
-            {stop.accessNotes && <p className="text-sm">{stop.accessNotes}</p>}
-          </li>
-        ))}
-      </ol>
-      <div>
-        <p className="mb-2 font-semibold">Pallets loaded</p>
-        <Counter
-          label={`Pallets loaded on ${load.truckName}`}
-          value={recorded.palletsLoaded ?? 0}
-          onChange={(value) => counts({ palletsLoaded: value }, `${value} pallets loaded`)}
-        />
+      <div className="flex flex-col gap-2">
+        <p className="font-semibold" data-testid="pallets-loaded">
+          Pallets loaded: {loadedTotal} of {load.pallets}
+        </p>
+        {!byStop && recorded.palletsLoaded !== null && load.stops.length > 1 && (
+          <p className="tn-muted text-sm">
+            {recorded.palletsLoaded} were recorded for the whole truck; counting by yard below
+            replaces that total.
+          </p>
+        )}
+        <ol className="flex flex-col gap-3">
+          {load.stops.map((stop, i) => (
+            <li key={`${stop.yardId}-${stop.lotId}`} className="border-l-4 tn-line pl-3">
+              <p className="font-semibold">
+                {i + 1}. {stop.yardName} — {stop.pallets} pallets
+              </p>
+              <p className="tn-muted text-sm">{stop.lotName}</p>
+              {stop.accessNotes && <p className="text-sm">{stop.accessNotes}</p>}
+              <div className="mt-2">
+                <Counter
+                  label={`Pallets loaded at ${stop.yardName} on ${load.truckName}`}
+                  value={loadedAt(stop)}
+                  onChange={(value) => countAt(i, value)}
+                />
+              </div>
+            </li>
+          ))}
+        </ol>
       </div>
+      <details>
+        <summary className="tn-button inline-flex items-center gap-2">
+          Pre-roll check
+          <span className={checkMissing.length ? 'tn-alert' : 'tn-muted'}>
+            {recorded.preRollCheck
+              ? checkMissing.length
+                ? `· ${checkMissing.length} open`
+                : `· done ${recorded.preRollCheck.checkedAt ? deviceClock(recorded.preRollCheck.checkedAt) : ''}`
+              : '· not done'}
+          </span>
+        </summary>
+        <fieldset className="mt-3 flex flex-col gap-2">
+          <legend className="sr-only">Pre-roll check on {load.truckName}</legend>
+          {preRollItems.map(({ item, label }) => (
+            <label key={item} className="flex min-h-12 items-center gap-3">
+              <input
+                type="checkbox"
+                className="size-7"
+                checked={check[item]}
+                onChange={(e) => setCheck({ ...check, [item]: e.target.checked })}
+              />
+              {label}
+            </label>
+          ))}
+          <button type="button" className="tn-button tn-button-primary" onClick={saveCheck}>
+            Keep the check
+          </button>
+        </fieldset>
+      </details>
       <details>
         <summary className="tn-button inline-flex items-center">Placed, left behind, lost</summary>
         <div className="mt-3 flex flex-col gap-3">

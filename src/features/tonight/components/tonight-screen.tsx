@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import type { MoveStatus } from '@shared/schemas/moves';
 import type { Units } from '@shared/schemas/users';
+import { preRollMissing } from '@shared/domain/pre-roll-check';
 import { useTonight } from '../api/get-tonight';
 import { applyPending } from '../lib/apply-pending';
 import { useQueueState, useTonightDevice } from '../lib/tonight-context';
@@ -56,6 +57,11 @@ function MoveSection({
   onChange: (change: NewChange) => void;
 }) {
   const step = nextStep[move.status];
+  // Not a lock: the crew may have checked on paper, but they see which trucks are open.
+  const unchecked =
+    step?.status === 'rolling'
+      ? move.loads.filter((l) => preRollMissing(l.recorded.preRollCheck).length > 0)
+      : [];
   return (
     <section className="flex flex-col gap-3" aria-label={move.name} data-move={move.id}>
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -84,6 +90,12 @@ function MoveSection({
           </button>
         )}
       </div>
+      {unchecked.length > 0 && (
+        <p className="tn-alert rounded-lg border-2 p-3" role="note">
+          Pre-roll check not kept for {unchecked.map((l) => l.truckName).join(', ')}. Walk round
+          each truck before it rolls.
+        </p>
+      )}
       {move.destinations.some((d) => d.accessNotes) && (
         <ul className="tn-muted text-sm">
           {move.destinations

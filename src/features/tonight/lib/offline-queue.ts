@@ -115,6 +115,19 @@ export class OfflineQueue {
     });
   }
 
+  /** Changes not yet on the server: waiting, or a conflict or refusal not yet settled. */
+  async unsent() {
+    await this.load();
+    return this.state.changes.length;
+  }
+
+  /** Forgets every change and snapshot on the device (sign-out). */
+  async forgetAll() {
+    await this.load();
+    await this.storage.clear();
+    this.set({ changes: [], unreachable: false, lastSyncedAt: null });
+  }
+
   /** Forgets a change (a conflict or refusal the crew chose not to redo). */
   discard = (key: string) => this.drop(key);
 

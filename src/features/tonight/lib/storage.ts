@@ -32,6 +32,8 @@ export interface TonightStorage {
   removeChange(idempotencyKey: string): Promise<void>;
   loadSnapshot(key: string): Promise<TonightSnapshot | undefined>;
   saveSnapshot(key: string, snapshot: TonightSnapshot): Promise<void>;
+  /** Forgets every change and snapshot (at sign-out: the next person sees none of it). */
+  clear(): Promise<void>;
 }
 
 /** Kept in memory only: for tests, and where IndexedDB is missing. */
@@ -45,6 +47,10 @@ export function memoryStorage(): TonightStorage {
     removeChange: async (key) => void changes.delete(key),
     loadSnapshot: async (key) => (snapshots.has(key) ? clone(snapshots.get(key)!) : undefined),
     saveSnapshot: async (key, snapshot) => void snapshots.set(key, clone(snapshot)),
+    clear: async () => {
+      changes.clear();
+      snapshots.clear();
+    },
   };
 }
 
@@ -68,6 +74,14 @@ export function indexedDbStorage(): TonightStorage {
     loadSnapshot: async (key) => (await (await open()).get('snapshots', key)) as TonightSnapshot,
     saveSnapshot: async (key, snapshot) =>
       void (await (await open()).put('snapshots', snapshot, key)),
+    clear: async () => {
+      const tx = (await open()).transaction(['changes', 'snapshots'], 'readwrite');
+      await Promise.all([
+        tx.objectStore('changes').clear(),
+        tx.objectStore('snapshots').clear(),
+        tx.done,
+      ]);
+    },
   };
 }
 

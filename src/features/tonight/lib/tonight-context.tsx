@@ -20,6 +20,42 @@ interface TonightDevice {
 const TonightContext = createContext<TonightDevice | null>(null);
 
 let shared: TonightDevice | null = null;
+/** What the mounted Tonight does when the shared queue lands changes (refresh its queries). */
+let onSharedApplied: () => void = () => undefined;
+
+/** The page's queue, made on first use (sign-out needs it even when Tonight was never opened). */
+function sharedDevice(): TonightDevice {
+  if (!shared) {
+    const store = deviceStorage();
+    shared = {
+      storage: store,
+      queue: new OfflineQueue(store, syncChanges, () => onSharedApplied()),
+    };
+  }
+  return shared;
+}
+
+/** The service worker's copy of API answers (see vite.config.ts, runtimeCaching). */
+const API_CACHE = 'duskhaul-api';
+
+/**
+ * Changes made in Tonight that the office does not have yet, after one last try to send them.
+ * Sign-out asks before it throws them away.
+ */
+export async function unsentTonightChanges(): Promise<number> {
+  const { queue } = sharedDevice();
+  if ((await queue.unsent()) > 0 && navigator.onLine !== false) await queue.sync();
+  return queue.unsent();
+}
+
+/**
+ * At sign-out: forgets Tonight's queue and snapshots and the service worker's cached API answers,
+ * so the next person on this phone sees none of them and no cached session answers for them.
+ */
+export async function forgetTonightOnThisDevice() {
+  await sharedDevice().queue.forgetAll();
+  if (typeof caches !== 'undefined') await caches.delete(API_CACHE);
+}
 
 /**
  * The device's storage and queue for Tonight. Tests pass a memory storage and their own send;
@@ -42,11 +78,8 @@ export function TonightProvider({
       void queryClient.invalidateQueries({ queryKey: ['moves'] });
     };
     if (storage) return { storage, queue: new OfflineQueue(storage, send, onApplied) };
-    if (!shared) {
-      const store = deviceStorage();
-      shared = { storage: store, queue: new OfflineQueue(store, send, onApplied) };
-    }
-    return shared;
+    onSharedApplied = onApplied;
+    return sharedDevice();
   });
 
   useEffect(() => {

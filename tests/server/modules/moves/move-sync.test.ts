@@ -321,4 +321,88 @@ describe('POST /api/moves/sync', () => {
     expect(notes).toBe('');
     await planner.post('/api/moves/sync', { changes: [] }).expect(400);
   });
+  it('when the crew counts pallets per pick-up yard then the truck total is their sum, and a stop the truck does not make is refused', async () => {
+    const move = await plannedMove('2027-02-14', [40, 20]);
+    const { body: full } = await planner.get(`/api/moves/${move.id}`).expect(200);
+    const load = full.loads.find(
+      (l: { plan: { stops: unknown[] } }) => l.plan.stops.length === 2,
+    ) as { id: string; version: number; plan: { stops: Array<{ yardId: string; lotId: string }> } };
+    expect(load, 'one truck calls at both yards').toBeDefined();
+    const [first, second] = load.plan.stops.map(({ yardId, lotId }) => ({ yardId, lotId }));
+    const counts = (palletsByStop: unknown, extra: Record<string, unknown> = {}) => ({
+      idempotencyKey: randomUUID(),
+      kind: 'load-counts',
+      moveId: move.id,
+      loadId: load.id,
+      version: load.version,
+      payload: { palletsByStop, ...extra },
+    });
+    const refused = (
+      await crew
+        .post('/api/moves/sync', {
+          changes: [
+            counts([{ yardId: w.yardA, lotId: w.unweighedLot, pallets: 3 }]),
+            counts([
+              { ...first, pallets: 3 },
+              { ...first, pallets: 1 },
+            ]),
+            counts([{ ...first, pallets: 3 }], { palletsLoaded: 4 }),
+          ],
+        })
+        .expect(200)
+    ).body.results;
+    expect(
+      refused.map(
+        (r: { error: { details: Array<{ field: string }> } }) => r.error.details[0].field,
+      ),
+    ).toEqual(['palletsByStop.0', 'palletsByStop.1', 'palletsLoaded']);
+    const [untouched] = await t.db.query(
+      `SELECT pallets_loaded, pallets_by_stop, version FROM move_loads WHERE id = $1`,
+      [load.id],
+    );
+    expect(untouched).toEqual({
+      pallets_loaded: null,
+      pallets_by_stop: null,
+      version: load.version,
+    });
+
+    const [applied] = (
+      await crew
+        .post('/api/moves/sync', {
+          changes: [
+            counts([
+              { ...first, pallets: 5 },
+              { ...second, pallets: 2 },
+            ]),
+          ],
+        })
+        .expect(200)
+    ).body.results;
+    expect(applied.record).toMatchObject({
+      palletsLoaded: 7,
+      palletsByStop: [
+        { ...first, pallets: 5 },
+        { ...second, pallets: 2 },
+      ],
+    });
+    const { body: sheet } = await planner.get(`/api/moves/${move.id}/load-sheet`).expect(200);
+    const page = sheet.pages.find((p: { loadId: string }) => p.loadId === load.id);
+    expect(page.recorded).toMatchObject({
+      palletsLoaded: 7,
+      palletsByStop: applied.record.palletsByStop,
+    });
+
+    // A bare truck total afterwards replaces the per-stop counts it no longer agrees with.
+    await crew
+      .patch(`/api/moves/${move.id}/loads/${load.id}`, {
+        version: applied.record.version,
+        palletsLoaded: 6,
+      })
+      .expect(200);
+    const [after] = await t.db.query(
+      `SELECT pallets_loaded, pallets_by_stop FROM move_loads WHERE id = $1`,
+      [load.id],
+    );
+    expect(after).toEqual({ pallets_loaded: 6, pallets_by_stop: null });
+  });
 });

@@ -1,0 +1,143 @@
+import { screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { LoadCard } from '@/features/tonight/components/load-card';
+import { OfflineQueue } from '@/features/tonight/lib/offline-queue';
+import { memoryStorage } from '@/features/tonight/lib/storage';
+import type { NewChange } from '@/features/tonight/lib/offline-queue';
+import type { LoadRecord, TonightLoad, TonightMove } from '@/features/tonight/types';
+import { renderWithProviders } from './support';
+
+const yardA = '33333333-3333-4333-8333-333333333333';
+const yardB = '44444444-4444-4444-8444-444444444444';
+const lotA = '55555555-5555-4555-8555-555555555555';
+const lotB = '66666666-6666-4666-8666-666666666666';
+
+const stop = (yardId: string, yardName: string, lotId: string, pallets: number) => ({
+  yardId,
+  yardName,
+  lotId,
+  lotName: 'Two deeps',
+  pallets,
+  colonies: pallets * 4,
+  accessNotes: '',
+  civilDusk: null,
+  timeZone: 'America/Chicago',
+});
+
+function card(recorded: Partial<LoadRecord> = {}) {
+  const load: TonightLoad = {
+    loadId: '22222222-2222-4222-8222-222222222222',
+    key: 'truck-1',
+    truckName: 'Rig Amber',
+    driverNames: ['Ola Venn'],
+    pallets: 18,
+    colonies: 72,
+    departure: null,
+    arrival: null,
+    stops: [stop(yardA, 'Dry Fork', lotA, 12), stop(yardB, 'Salt Lick', lotB, 6)],
+    recorded: {
+      palletsLoaded: null,
+      palletsByStop: null,
+      coloniesPlaced: null,
+      coloniesLeftBehind: null,
+      coloniesLost: null,
+      placements: null,
+      preRollCheck: null,
+      notes: '',
+      version: 3,
+      ...recorded,
+    },
+  };
+  const move: TonightMove = {
+    id: '11111111-1111-4111-8111-111111111111',
+    name: 'Run north',
+    nightOf: '2027-02-01',
+    status: 'loading',
+    version: 5,
+    destinations: [],
+    loads: [load],
+    cautions: [],
+  };
+  const onChange = vi.fn<(change: NewChange) => void>();
+  renderWithProviders(<LoadCard move={move} load={load} units="imperial" onChange={onChange} />);
+  return onChange;
+}
+
+describe('Tonight load card', () => {
+  it('when the crew counts a pallet at the second yard then the change carries every stop and their sum', async () => {
+    const onChange = card({
+      palletsLoaded: 5,
+      palletsByStop: [{ yardId: yardA, lotId: lotA, pallets: 5 }],
+    });
+    expect(screen.getByTestId('pallets-loaded').textContent).toBe('Pallets loaded: 5 of 18');
+    await userEvent.click(
+      screen.getByRole('button', { name: 'Pallets loaded at Salt Lick on Rig Amber: one more' }),
+    );
+    expect(onChange).toHaveBeenCalledWith(
+      expect.objectContaining({
+        kind: 'load-counts',
+        baseVersion: 3,
+        payload: {
+          palletsByStop: [
+            { yardId: yardA, lotId: lotA, pallets: 5 },
+            { yardId: yardB, lotId: lotB, pallets: 1 },
+          ],
+          palletsLoaded: 6,
+        },
+        label: 'Rig Amber: 1 pallet loaded at Salt Lick',
+      }),
+    );
+  });
+
+  it('when only a truck total was recorded on a two-stop truck then the crew is told counting by yard replaces it', () => {
+    card({ palletsLoaded: 9 });
+    expect(screen.getByTestId('pallets-loaded').textContent).toBe('Pallets loaded: 9 of 18');
+    expect(screen.getByText(/9 were recorded for the whole truck/)).toBeTruthy();
+  });
+
+  it('when the crew keeps the pre-roll check then the ticked items and the time go with it', async () => {
+    const onChange = card();
+    expect(screen.getByText('· not done')).toBeTruthy();
+    await userEvent.click(screen.getByText('Pre-roll check'));
+    await userEvent.click(screen.getByLabelText('Nets on and clipped down'));
+    await userEvent.click(screen.getByLabelText('Straps tight on every tier'));
+    await userEvent.click(screen.getByRole('button', { name: 'Keep the check' }));
+    const change = onChange.mock.calls[0][0];
+    expect(change.label).toBe('Rig Amber: pre-roll check, 2 of 5 ticked');
+    expect(change.payload.preRollCheck).toMatchObject({
+      netsClipped: true,
+      strapsTight: true,
+      palletsClean: false,
+      waterAboard: false,
+      certificateInCab: false,
+    });
+    expect(Date.parse((change.payload.preRollCheck as { checkedAt: string }).checkedAt)).not.toBe(
+      NaN,
+    );
+  });
+});
+
+describe('Tonight queue at sign-out', () => {
+  it('when the device is forgotten then its changes and snapshots are gone', async () => {
+    const storage = memoryStorage();
+    const queue = new OfflineQueue(storage, vi.fn());
+    await queue.enqueue({
+      kind: 'note',
+      moveId: '11111111-1111-4111-8111-111111111111',
+      payload: { text: 'gate chained' },
+      label: 'a note',
+    });
+    await storage.saveSnapshot('2027-02-01', {
+      fetchedAt: '2027-02-01T20:00:00Z',
+      nights: ['2027-02-01'],
+      upcoming: false,
+      moves: [],
+    });
+    expect(await queue.unsent()).toBe(1);
+    await queue.forgetAll();
+    expect(await queue.unsent()).toBe(0);
+    expect(await storage.listChanges()).toEqual([]);
+    expect(await storage.loadSnapshot('2027-02-01')).toBeUndefined();
+  });
+});
