@@ -3,6 +3,7 @@ import { GrowerCorrespondence1796180200000 } from './1796180200000-grower-corres
 import { MovePlansAndFeeds1796190000000 } from './1796190000000-move-plans-and-feeds';
 import { InvoicePayments1796200000000 } from './1796200000000-invoice-payments';
 import { PalletsByStop1796210000000 } from './1796210000000-pallets-by-stop';
+import { ColonyBalances1796220000000 } from './1796220000000-colony-balances';
 
 /** Migrations in the order they run. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   MovePlansAndFeeds1796190000000,
   InvoicePayments1796200000000,
   PalletsByStop1796210000000,
+  ColonyBalances1796220000000,
 ];

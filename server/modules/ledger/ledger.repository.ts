@@ -1,38 +1,42 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { ColonyCount, PlaceKind } from '../../../shared/schemas/ledger';
+import { preparedRead } from '../../db/data-source';
 
 type Db = DataSource | EntityManager;
 
-/** Signed flows of colonies per entry: + where they arrive, − where they leave. */
-const flows = `
-  SELECT lot_id, to_kind AS place_kind, to_id AS place_id, colonies AS delta, occurred_on
-    FROM ledger_entries WHERE operation_id = $1 AND to_id IS NOT NULL
-  UNION ALL
-  SELECT lot_id, from_kind, from_id, -colonies, occurred_on
-    FROM ledger_entries WHERE operation_id = $1 AND from_id IS NOT NULL`;
-
 /** Sums ledger entries into counts; the ledger is the only source of colony counts. */
 export class LedgerRepository {
-  /** Colonies per place and lot on a date (entries dated that day included). */
+  /**
+   * Colonies per place and lot on a date (entries dated that day included): each running
+   * balance less the flows dated after `on` (see the colony_balances migration).
+   */
   async countsOn(
     db: Db,
     operationId: string,
     on: string,
     place?: { kind?: PlaceKind; id?: string },
   ): Promise<ColonyCount[]> {
-    const rows: Array<Record<string, string | number>> = await db.query(
-      `SELECT f.place_kind, f.place_id, COALESCE(y.name, s.name) AS place_name, f.lot_id, l.name AS lot_name,
-              l.hive_setup_id, h.name AS hive_setup_name, SUM(f.delta)::int AS colonies
-         FROM (${flows}) f
-         JOIN colony_lots l ON l.id = f.lot_id
+    const rows = await preparedRead<Record<string, string | number>>(
+      db,
+      'ledger-counts-on',
+      `WITH sums AS (
+         SELECT place_kind, place_id, lot_id, SUM(colonies)::int AS colonies
+           FROM (SELECT place_kind, place_id, lot_id, colonies FROM colony_balances
+                  WHERE operation_id = $1
+                 UNION ALL
+                 SELECT place_kind, place_id, lot_id, -delta FROM ledger_flows
+                  WHERE operation_id = $1 AND occurred_on > $2) x
+          WHERE ($3::text IS NULL OR place_kind = $3)
+            AND ($4::uuid IS NULL OR place_id = $4)
+          GROUP BY place_kind, place_id, lot_id
+         HAVING SUM(colonies) <> 0)
+       SELECT c.place_kind, c.place_id, COALESCE(y.name, s.name) AS place_name, c.lot_id,
+              l.name AS lot_name, l.hive_setup_id, h.name AS hive_setup_name, c.colonies
+         FROM sums c
+         JOIN colony_lots l ON l.id = c.lot_id
          JOIN hive_setups h ON h.id = l.hive_setup_id
-         LEFT JOIN yards y ON f.place_kind = 'yard' AND y.id = f.place_id
-         LEFT JOIN sites s ON f.place_kind = 'site' AND s.id = f.place_id
-        WHERE f.occurred_on <= $2
-          AND ($3::text IS NULL OR f.place_kind = $3)
-          AND ($4::uuid IS NULL OR f.place_id = $4)
-        GROUP BY f.place_kind, f.place_id, place_name, f.lot_id, l.name, l.hive_setup_id, h.name
-       HAVING SUM(f.delta) <> 0
+         LEFT JOIN yards y ON c.place_kind = 'yard' AND y.id = c.place_id
+         LEFT JOIN sites s ON c.place_kind = 'site' AND s.id = c.place_id
         ORDER BY place_name, l.name`,
       [operationId, on, place?.kind ?? null, place?.id ?? null],
     );

@@ -1,12 +1,12 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import { csrfSync } from 'csrf-sync';
 import type { Env } from '../../config/env';
+import { pgPool } from '../../db/data-source';
 import { SessionUsers } from './session-users';
 import { SignInThrottle } from './sign-in-throttle';
 import { verifyPassword } from './passwords';
@@ -31,6 +31,13 @@ export interface SignInFailure {
   message: string;
 }
 
+/**
+ * The user read with the session (see QuietStore.get), carried from the session's data to its
+ * request. A symbol, so express-session neither copies it into the session nor saves it.
+ */
+const userWithSession = Symbol('userWithSession');
+type WithLoadedUser = { [userWithSession]?: SessionUser | null };
+
 /** Sessions in PostgreSQL, passport-local sign-in, CSRF tokens and timeouts. */
 export function createSessionLayer(db: DataSource, env: Env) {
   const users = new SessionUsers(db);
@@ -39,12 +46,39 @@ export function createSessionLayer(db: DataSource, env: Env) {
   // Rolling sessions would otherwise UPDATE the session row on every request. The store's touch
   // is skipped and `keepAlive` re-saves a signed-in session at most once a minute instead, so the
   // idle timeout holds to the minute at a fraction of the writes.
+  //
+  // Each request would also read its session and then, for passport, its user: two round trips.
+  // `get` reads both in one query (the user only while active); `createSession` hands the user to
+  // the request and deserializeUser takes it from there, so the user is still fresh every request.
   class QuietStore extends PgStore {
+    private pruning = false;
+
     touch(_sid: string, _session: session.SessionData, callback?: () => void) {
       callback?.();
     }
+
+    get(sid: string, callback: (error: unknown, data?: session.SessionData | null) => void) {
+      // The base get starts the prune timer; pruneSessions starts it too, after one prune.
+      if (!this.pruning) {
+        this.pruning = true;
+        this.pruneSessions();
+      }
+      users.loadSession(sid).then((found) => {
+        if (!found) return callback(null, null);
+        const data = found.sess as unknown as session.SessionData & WithLoadedUser;
+        data[userWithSession] = found.user;
+        callback(null, data);
+      }, callback);
+    }
+
+    createSession(req: Request, data: session.SessionData) {
+      const loaded = data as session.SessionData & WithLoadedUser;
+      (req as Request & WithLoadedUser)[userWithSession] = loaded[userWithSession];
+      delete loaded[userWithSession];
+      return super.createSession(req, data);
+    }
   }
-  const pool = (db.driver as unknown as { master: Pool }).master;
+  const pool = pgPool(db);
   const secure = env.HTTPS === 'true';
 
   const sessionMiddleware = session({
@@ -91,9 +125,13 @@ export function createSessionLayer(db: DataSource, env: Env) {
     ),
   );
   passport.serializeUser((user, done) => done(null, (user as SessionUser).id));
-  passport.deserializeUser((id: string, done) => {
-    users.findActive(id).then((user) => done(null, user ?? false), done);
-  });
+  passport.deserializeUser(
+    (req: Request, id: string, done: (error: unknown, user?: SessionUser | false) => void) => {
+      const loaded = (req as Request & WithLoadedUser)[userWithSession];
+      if (loaded === null || loaded?.id === id) return done(null, loaded ?? false);
+      users.findActive(id).then((user) => done(null, user ?? false), done);
+    },
+  );
 
   // Ends a session past its absolute lifetime, however active it has been.
   const absoluteTimeout: RequestHandler = (req, _res, next) => {

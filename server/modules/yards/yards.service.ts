@@ -13,24 +13,39 @@ import { LedgerRepository } from '../ledger/ledger.repository';
 import { today } from '../ledger/ledger.service';
 import { Yard } from './yard.entity';
 
-const yards = new TenantRepository(Yard, 'Yard');
+// A list reads only what a yard's view shows.
+const yards = new TenantRepository(Yard, 'Yard', [
+  'id',
+  'name',
+  'latitude',
+  'longitude',
+  'capacity',
+  'accessNotes',
+  'notes',
+  'lastVisitOn',
+  'version',
+  'archivedAt',
+]);
 const ledger = new LedgerRepository();
 
-function present(yard: Yard, counts: ColonyCount[]): YardView {
-  const here = counts.filter((c) => c.placeKind === 'yard' && c.placeId === yard.id);
-  const bySetup = new Map<
-    string,
-    { hiveSetupId: string; hiveSetupName: string; colonies: number }
-  >();
-  for (const c of here) {
-    const entry = bySetup.get(c.hiveSetupId) ?? {
+type SetupCount = YardView['coloniesBySetup'][number];
+
+/** Colonies by hive setup from per-lot counts (a yard holds lots of several setups). */
+function bySetup(counts: ColonyCount[]): SetupCount[] {
+  const setups = new Map<string, SetupCount>();
+  for (const c of counts) {
+    const entry = setups.get(c.hiveSetupId) ?? {
       hiveSetupId: c.hiveSetupId,
       hiveSetupName: c.hiveSetupName,
       colonies: 0,
     };
     entry.colonies += c.colonies;
-    bySetup.set(c.hiveSetupId, entry);
+    setups.set(c.hiveSetupId, entry);
   }
+  return [...setups.values()].sort((a, b) => a.hiveSetupName.localeCompare(b.hiveSetupName));
+}
+
+function present(yard: Yard, coloniesBySetup: SetupCount[]): YardView {
   return {
     id: yard.id,
     name: yard.name,
@@ -42,8 +57,8 @@ function present(yard: Yard, counts: ColonyCount[]): YardView {
     lastVisitOn: yard.lastVisitOn,
     version: yard.version,
     archivedAt: isoOrNull(yard.archivedAt),
-    colonies: here.reduce((sum, c) => sum + c.colonies, 0),
-    coloniesBySetup: [...bySetup.values()],
+    colonies: coloniesBySetup.reduce((sum, c) => sum + c.colonies, 0),
+    coloniesBySetup,
   };
 }
 
@@ -51,8 +66,11 @@ function present(yard: Yard, counts: ColonyCount[]): YardView {
 export class YardsService {
   constructor(private readonly db: DataSource) {}
 
-  private counts(actor: Actor) {
-    return ledger.countsOn(this.db, actor.operationId, today(), { kind: 'yard' });
+  /** Today's colonies of one yard by hive setup. */
+  private async setupsAt(actor: Actor, id: string) {
+    return bySetup(
+      await ledger.countsOn(this.db, actor.operationId, today(), { kind: 'yard', id }),
+    );
   }
 
   async list(actor: Actor, query: YardListQuery) {
@@ -60,12 +78,20 @@ export class YardsService {
       if (query.q)
         qb.andWhere('record.name ILIKE :q', { q: `%${query.q.replace(/[%_\\]/g, '\\$&')}%` });
     });
-    const counts = await this.counts(actor);
-    return { items: page.items.map((y) => present(y, counts)), total: page.total };
+    // Every yard's counts in one read of the running balances: cheaper than picking out the
+    // page's yards, and a page is most of an operation's yards.
+    const counts = await ledger.countsOn(this.db, actor.operationId, today(), { kind: 'yard' });
+    const byYard = new Map<string, ColonyCount[]>();
+    for (const c of counts) byYard.set(c.placeId, [...(byYard.get(c.placeId) ?? []), c]);
+    return {
+      items: page.items.map((y) => present(y, bySetup(byYard.get(y.id) ?? []))),
+      total: page.total,
+    };
   }
 
   async get(actor: Actor, id: string) {
-    return present(await yards.get(this.db, actor.operationId, id), await this.counts(actor));
+    const yard = await yards.get(this.db, actor.operationId, id);
+    return present(yard, await this.setupsAt(actor, yard.id));
   }
 
   async create(actor: Actor, input: YardCreateRequest) {
@@ -77,13 +103,13 @@ export class YardsService {
     const yard = await this.db.transaction((tx) =>
       yards.update(tx, actor.operationId, id, version, changes),
     );
-    return present(yard, await this.counts(actor));
+    return present(yard, await this.setupsAt(actor, yard.id));
   }
 
   async archive(actor: Actor, id: string, version: number) {
     const yard = await this.db.transaction((tx) =>
       yards.archive(tx, actor.operationId, id, version),
     );
-    return present(yard, await this.counts(actor));
+    return present(yard, await this.setupsAt(actor, yard.id));
   }
 }

@@ -171,4 +171,43 @@ describe('/api/ledger', () => {
       '2026-07-01',
     ]);
   });
+  it('when entries are added, changed or removed then the running balances equal the ledger summed afresh', async () => {
+    const balancesMatchLedger = async () => {
+      const [row] = await t.db.query(
+        `SELECT
+           (SELECT COALESCE(json_agg(b ORDER BY b.place_id, b.lot_id), '[]') FROM
+              (SELECT place_id, lot_id, colonies FROM colony_balances
+                WHERE operation_id = $1 AND colonies <> 0) b) AS balances,
+           (SELECT COALESCE(json_agg(f ORDER BY f.place_id, f.lot_id), '[]') FROM
+              (SELECT place_id, lot_id, SUM(delta)::int AS colonies FROM ledger_flows
+                WHERE operation_id = $1 GROUP BY place_id, lot_id HAVING SUM(delta) <> 0) f) AS summed`,
+        [operationId],
+      );
+      expect(row.balances).toEqual(row.summed);
+      return row.summed as unknown[];
+    };
+    expect((await balancesMatchLedger()).length).toBeGreaterThan(0);
+    // Dated after today: counted from its date on, not before.
+    await entry({
+      kind: 'purchase',
+      occurredOn: '2099-01-01',
+      colonies: 5,
+      to: { kind: 'yard', id: away },
+    }).expect(201);
+    const before = await countAt(away, '2098-12-31');
+    expect(await countAt(away, '2099-01-01')).toBe(before + 5);
+    await balancesMatchLedger();
+    // The app never edits or deletes entries; the balances follow if someone does by hand.
+    await t.db.query(
+      `UPDATE ledger_entries SET colonies = colonies + 1 WHERE operation_id = $1 AND occurred_on = '2099-01-01'`,
+      [operationId],
+    );
+    await balancesMatchLedger();
+    await t.db.query(
+      `DELETE FROM ledger_entries WHERE operation_id = $1 AND occurred_on = '2099-01-01'`,
+      [operationId],
+    );
+    await balancesMatchLedger();
+    expect(await countAt(away, '2099-01-01')).toBe(before);
+  });
 });
