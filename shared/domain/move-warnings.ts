@@ -8,6 +8,7 @@
  * hemisphere is shifted by six months. It errs on the side of showing the caution.
  */
 import { parseCalendarDate } from './calendar-date';
+import { formatLocalTime } from './local-time';
 
 /** How serious a warning is: `danger` breaks a rule or a contract, `warning` needs a look. */
 export type WarningSeverity = 'danger' | 'warning' | 'info';
@@ -159,14 +160,14 @@ export function moveWarnings(facts: MoveWarningFacts): MoveWarning[] {
         code: 'multi-night-haul',
         severity: 'info',
         truckKey: t.key,
-        message: `${t.name} is on the road past the first dawn and arrives in the dark at ${t.arrival ?? 'an unknown time'}: keep the load moving, shaded and watered at stops, and plan the drivers' rests.`,
+        message: `${t.name} is on the road past the first dawn and arrives in the dark at ${t.arrival ? formatLocalTime(t.arrival) : 'an unknown time'}: keep the load moving, shaded and watered at stops, and plan the drivers' rests.`,
       });
     } else if (t.arrivesBeforeDawn === false) {
       warnings.push({
         code: 'arrives-after-dawn',
         severity: 'danger',
         truckKey: t.key,
-        message: `${t.name} arrives at ${t.arrival ?? 'an unknown time'}, after civil dawn (${t.civilDawn ?? 'unknown'}): bees will be flying at unloading. Leave earlier, add a driver, or hold at a yard near the site.`,
+        message: `${t.name} arrives at ${t.arrival ? formatLocalTime(t.arrival) : 'an unknown time'}, after civil dawn (${t.civilDawn ? formatLocalTime(t.civilDawn) : 'unknown'}): bees will be flying at unloading. Leave earlier, add a driver, or hold at a yard near the site.`,
       });
     }
   }

@@ -20,6 +20,7 @@ import { assertInRange, assertLatLon } from './guards';
 import { scheduleHaul, WEEKLY_NOTE_MINUTES } from './hours-of-service';
 import { firstMorningEventAfter, sunEventsAt } from './sun';
 import { parseCalendarDate } from './calendar-date';
+import { formatDuration, formatLocalTime } from './local-time';
 import { formatInstantInZone, timeZoneAt, zoneOffsetMinutes } from './time-zones';
 
 /** Default ratio of road distance to great-circle distance (common practice, no source). */
@@ -195,9 +196,9 @@ export function computeMoveWindow(input: MoveWindowInput): MoveWindow {
       4,
     );
     notes.push(
-      `Arrives ${Math.round((arrival.getTime() - civilDawn!.getTime()) / MINUTE_MS)} min after the first civil dawn.` +
+      `Arrives ${formatDuration((arrival.getTime() - civilDawn!.getTime()) / MINUTE_MS)} after the first civil dawn.` +
         (nextDawn
-          ? ` The next civil dawn after arrival is ${formatInstantInZone(nextDawn, destinationZone)}; departing up to ${Math.floor((nextDawn.getTime() - arrival.getTime()) / MINUTE_MS)} min later would still arrive before it.`
+          ? ` The next civil dawn after arrival is ${formatLocalTime(formatInstantInZone(nextDawn, destinationZone), destinationZone)}; departing up to ${formatDuration(Math.floor((nextDawn.getTime() - arrival.getTime()) / MINUTE_MS))} later would still arrive before it.`
           : ''),
     );
   }

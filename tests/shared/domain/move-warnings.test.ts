@@ -58,7 +58,10 @@ describe('moveWarnings', () => {
       severity: 'danger',
       truckKey: 'load-0',
     });
-    expect(warning.message).toContain('09:10');
+    // On the destination's clock; 2027-01-27 is a Wednesday.
+    expect(warning.message).toContain(
+      'arrives at Wed 9:10 AM (UTC−8), after civil dawn (Wed 6:41 AM (UTC−8))',
+    );
   });
 
   it('when colonies are left behind or a bound is over payload or legal gross then it warns (danger)', () => {

@@ -2,7 +2,7 @@ import type { Units } from '@shared/schemas/users';
 import { cx } from '@/components/ui/cx';
 import { formatCount, formatWeight } from '@/lib/units';
 import type { PlannedTruck, PlanTotals } from '../types';
-import { formatLocalTime } from '../lib/local-time';
+import { formatLocalTime } from '@shared/domain/local-time';
 
 /** Per truck: yards in pick-up order, pallets, colonies, weights, payload used and gross check. */
 export function LoadSheetTable({

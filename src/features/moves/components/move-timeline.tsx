@@ -1,5 +1,5 @@
 import type { PlanTimeline } from '../types';
-import { formatDuration, formatLocalTime } from '../lib/local-time';
+import { formatDuration, formatLocalTime } from '@shared/domain/local-time';
 
 interface Row {
   label: string;

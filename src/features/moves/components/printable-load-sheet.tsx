@@ -1,7 +1,7 @@
 import type { Units } from '@shared/schemas/users';
 import { preRollItems } from '@shared/domain/pre-roll-check';
 import { formatCount, formatDate, formatWeight } from '@/lib/units';
-import { formatLocalTime } from '../lib/local-time';
+import { formatLocalTime } from '@shared/domain/local-time';
 import type { LoadSheet, LoadSheetPage } from '../types';
 import './load-sheet-print.css';
 
