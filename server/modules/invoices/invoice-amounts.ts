@@ -17,11 +17,8 @@ export async function coloniesPlaced(tx: EntityManager, contract: Contract): Pro
   if (contract.siteIds.length === 0) return 0;
   const [row]: Array<{ peak: number | null }> = await tx.query(
     `WITH flows AS (
-       SELECT occurred_on, colonies AS delta FROM ledger_entries
-        WHERE operation_id = $1 AND to_kind = 'site' AND to_id = ANY($2::uuid[])
-       UNION ALL
-       SELECT occurred_on, -colonies FROM ledger_entries
-        WHERE operation_id = $1 AND from_kind = 'site' AND from_id = ANY($2::uuid[])),
+       SELECT occurred_on, delta FROM ledger_flows
+        WHERE operation_id = $1 AND place_kind = 'site' AND place_id = ANY($2::uuid[])),
      days AS (
        SELECT $3::date AS d
        UNION SELECT occurred_on FROM flows

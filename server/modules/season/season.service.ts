@@ -72,12 +72,9 @@ export async function seasonBoard(db: DataSource, actor: Actor, from: string, to
   }>;
   const lots = (await db.query(
     `SELECT f.lot_id, l.name, l.mean_frames, SUM(f.delta)::int AS colonies
-       FROM (SELECT lot_id, colonies AS delta FROM ledger_entries
-              WHERE operation_id = $1 AND to_id IS NOT NULL AND occurred_on <= $2
-             UNION ALL
-             SELECT lot_id, -colonies FROM ledger_entries
-              WHERE operation_id = $1 AND from_id IS NOT NULL AND occurred_on <= $2) f
+       FROM ledger_flows f
        JOIN colony_lots l ON l.id = f.lot_id
+      WHERE f.operation_id = $1 AND f.occurred_on <= $2
       GROUP BY f.lot_id, l.name, l.mean_frames
      HAVING SUM(f.delta) > 0
       ORDER BY l.name`,
