@@ -5,7 +5,12 @@
  */
 import { planNightLoads } from '../../../shared/domain/load-plan';
 import type { HiveWeightStats } from '../../../shared/domain/load-weight';
-import { computeMoveWindow, type MoveWindow } from '../../../shared/domain/move-window';
+import { greatCircleDistanceKm } from '../../../shared/domain/distance';
+import {
+  computeMoveWindow,
+  DEFAULT_ROAD_FACTOR,
+  type MoveWindow,
+} from '../../../shared/domain/move-window';
 import {
   moveCautions,
   moveWarnings,
@@ -129,7 +134,9 @@ export interface PlannedTruck {
   /** Tare + upper-bound load against the legal gross. */
   gross: GrossWeightCheck;
   stops: PlannedStop[];
-  /** This truck's own haul from its first pick-up yard (null when it carries nothing). */
+  /** The yards it calls at in order, with the drives between them (empty when it carries nothing). */
+  pickups: PlannedPickup[];
+  /** This truck's own haul from its last pick-up yard (null when it carries nothing). */
   departure: string | null;
   arrival: string | null;
   /** Civil dawn at the destination after this truck departs. */
@@ -137,6 +144,20 @@ export interface PlannedTruck {
   arrivesBeforeDawn: boolean | null;
   /** Arrival between civil dusk and civil dawn of its local night (a later night counts too). */
   arrivesInDarkness: boolean | null;
+}
+
+/**
+ * One pick-up yard on a truck's way: loading there starts at `loadingStart` (the yard's zone),
+ * after the drive from the yard before (none for the first, where loading starts at dusk).
+ */
+export interface PlannedPickup {
+  yardId: string;
+  yardName: string;
+  timeZone: string;
+  /** From the yard before: road km (great circle × road factor) and minutes at the average speed. */
+  driveKm: number;
+  driveMinutes: number;
+  loadingStart: string;
 }
 
 /** Dusk at one origin yard, in that yard's zone. */
@@ -182,8 +203,11 @@ export interface MovePlan {
   timeline: {
     from: { yardId: string; yardName: string } | null;
     to: { kind: 'yard' | 'site'; id: string; name: string } | null;
+    /** The first loaded truck's haul (or, with no truck, the first origin's). */
     window: MoveWindow | null;
-    /** Whether the first pick-up yard's haul arrives in the dark (see arrivesInDarkness). */
+    /** That truck's pick-up yards: loading at the first, then a drive and loading at each next. */
+    pickups: PlannedPickup[];
+    /** Whether that haul arrives in the dark (see arrivesInDarkness). */
     arrivesInDarkness: boolean | null;
     originDusk: OriginDusk[];
   };
@@ -266,7 +290,60 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
       if (other.yardId === o.yardId) windows.set(i, window);
     return window;
   };
-  const mainWindow = windowFrom(0);
+  /**
+   * A truck's haul through its pick-up yards (origin positions, in pick-up order): loading starts
+   * at dusk at the first yard; it drives to each next yard and loads there; the haul to the
+   * destination leaves from the last one.
+   */
+  const haulThrough = (
+    positions: number[],
+  ): { window: MoveWindow | null; pickups: PlannedPickup[] } => {
+    const yards = positions.filter(
+      (p, i) => positions.findIndex((q) => origins[q].yardId === origins[p].yardId) === i,
+    );
+    const first = yards.length ? windowFrom(yards[0]) : null;
+    if (!first) return { window: null, pickups: [] };
+    const pickups: PlannedPickup[] = [];
+    let loadingStart = new Date(first.loadingStart);
+    for (const [i, position] of yards.entries()) {
+      const o = origins[position];
+      const timeZone = timeZoneAt(o.latitude, o.longitude);
+      let driveKm = 0;
+      let driveMinutes = 0;
+      if (i > 0) {
+        const before = origins[yards[i - 1]];
+        driveKm =
+          greatCircleDistanceKm(
+            { lat: before.latitude, lon: before.longitude },
+            { lat: o.latitude, lon: o.longitude },
+          ) * DEFAULT_ROAD_FACTOR;
+        driveMinutes = (driveKm / facts.averageSpeedKmh) * 60;
+        loadingStart = new Date(
+          loadingStart.getTime() + (facts.loadingMinutes + driveMinutes) * 60_000,
+        );
+      }
+      pickups.push({
+        yardId: o.yardId,
+        yardName: o.yardName,
+        timeZone,
+        driveKm: round1(driveKm),
+        driveMinutes: Math.round(driveMinutes),
+        loadingStart: formatInstantInZone(loadingStart, timeZone),
+      });
+    }
+    if (yards.length === 1) return { window: first, pickups };
+    const last = origins[yards[yards.length - 1]];
+    const window = computeMoveWindow({
+      origin: { lat: last.latitude, lon: last.longitude },
+      destination: { lat: destination!.latitude, lon: destination!.longitude },
+      date: facts.nightOf,
+      loadingStart: loadingStart.toISOString(),
+      loadingMinutes: facts.loadingMinutes,
+      averageSpeedKmh: facts.averageSpeedKmh,
+      drivers: facts.drivers,
+    });
+    return { window, pickups };
+  };
   if (facts.destinations.length > 1) {
     assumptions.push(
       `The timeline runs to the first destination (${destination?.name}); the other ${facts.destinations.length - 1} are close by.`,
@@ -274,7 +351,7 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
   }
   if (new Set(origins.map((o) => o.yardId)).size > 1) {
     assumptions.push(
-      'Each truck’s timeline starts at its first pick-up yard; driving between yards is counted inside the loading time.',
+      `A truck calling at several yards loads at each for the loading time and drives between them at the average speed over the great-circle distance × ${DEFAULT_ROAD_FACTOR}; that driving is not counted against the drivers' hours.`,
     );
   }
 
@@ -292,7 +369,7 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
         colonies: stop.colonies,
       };
     });
-    const window = load.stops.length ? windowFrom(Number(load.stops[0].yardId)) : null;
+    const { window, pickups } = haulThrough(load.stops.map((stop) => Number(stop.yardId)));
     return {
       key: truck.key,
       truckId: truck.truckId,
@@ -314,6 +391,7 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
         legalGrossKg: truck.legalGrossKg,
       }),
       stops,
+      pickups,
       departure: window?.departure ?? null,
       arrival: window?.arrival ?? null,
       civilDawn: window?.destination.civilDawn ?? null,
@@ -335,6 +413,14 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
       civilDusk: iso(sun.civilDusk, timeZone),
     });
   }
+
+  // The timeline shows the first truck that carries colonies; with none, the first origin's haul.
+  const firstLoaded = night.trucks.findIndex((load) => load.stops.length > 0);
+  const main =
+    firstLoaded >= 0
+      ? haulThrough(night.trucks[firstLoaded].stops.map((stop) => Number(stop.yardId)))
+      : haulThrough(origins.length ? [0] : []);
+  const mainWindow = main.window;
 
   const sumOf = (pick: (t: PlannedTruck) => number) => trucks.reduce((s, t) => s + pick(t), 0);
   const warnings = moveWarnings({
@@ -405,11 +491,16 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
       },
     },
     timeline: {
-      from: origins[0] ? { yardId: origins[0].yardId, yardName: origins[0].yardName } : null,
+      from: main.pickups[0]
+        ? { yardId: main.pickups[0].yardId, yardName: main.pickups[0].yardName }
+        : origins[0]
+          ? { yardId: origins[0].yardId, yardName: origins[0].yardName }
+          : null,
       to: destination
         ? { kind: destination.kind, id: destination.id, name: destination.name }
         : null,
       window: mainWindow,
+      pickups: main.pickups,
       arrivesInDarkness:
         mainWindow && destination ? arrivesInDarkness(mainWindow, destination) : null,
       originDusk,

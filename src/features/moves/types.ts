@@ -18,6 +18,16 @@ export interface PlannedStop {
 }
 
 /** One truck of the load sheet (POST /api/moves/preview, docs/moves.md). */
+/** A pick-up yard on a truck's way, with the drive from the yard before (none for the first). */
+export interface PlannedPickup {
+  yardId: string;
+  yardName: string;
+  timeZone: string;
+  driveKm: number;
+  driveMinutes: number;
+  loadingStart: string;
+}
+
 export interface PlannedTruck {
   key: string;
   truckId: string;
@@ -35,6 +45,8 @@ export interface PlannedTruck {
   payloadUsedUpperPercent: number;
   gross: { grossKg: number; legalGrossKg: number; marginKg: number; withinLimit: boolean };
   stops: PlannedStop[];
+  /** Absent in plans saved before pick-ups were routed. */
+  pickups?: PlannedPickup[];
   departure: string | null;
   arrival: string | null;
   civilDawn: string | null;
@@ -80,6 +92,8 @@ export interface PlanTimeline {
   from: { yardId: string; yardName: string } | null;
   to: { kind: 'yard' | 'site'; id: string; name: string } | null;
   window: MoveWindow | null;
+  /** Absent in plans saved before pick-ups were routed. */
+  pickups?: PlannedPickup[];
   arrivesInDarkness: boolean | null;
   originDusk: OriginDusk[];
 }

@@ -7,7 +7,10 @@ interface Row {
   detail?: string;
 }
 
-/** Dusk at each yard, loading, departure, the legs, arrival and dawn, each on its own place's clock. */
+/**
+ * Dusk at each yard, loading (and the drives between pick-up yards), departure, the legs, arrival
+ * and dawn, each on its own place's clock.
+ */
 export function MoveTimeline({ timeline }: { timeline: PlanTimeline }) {
   const w = timeline.window;
   if (!w) return <p className="text-dusk-300">Choose a yard and a destination to see the night.</p>;
@@ -17,10 +20,33 @@ export function MoveTimeline({ timeline }: { timeline: PlanTimeline }) {
       time: formatLocalTime(d.civilDusk ?? d.sunset, d.timeZone),
       detail: d.sunset ? `sunset ${formatLocalTime(d.sunset, d.timeZone)}` : undefined,
     })),
-    {
-      label: `Loading starts at ${timeline.from?.yardName ?? 'the first yard'}`,
-      time: formatLocalTime(w.loadingStart, w.origin.timeZone),
-    },
+    ...(timeline.pickups?.length
+      ? timeline.pickups.flatMap((p, i): Row[] =>
+          i === 0
+            ? [
+                {
+                  label: `Loading starts at ${p.yardName}`,
+                  time: formatLocalTime(p.loadingStart, p.timeZone),
+                },
+              ]
+            : [
+                {
+                  label: `Drive to ${p.yardName}`,
+                  time: formatDuration(p.driveMinutes),
+                  detail: `${Math.round(p.driveKm)} km`,
+                },
+                {
+                  label: `Loading at ${p.yardName}`,
+                  time: formatLocalTime(p.loadingStart, p.timeZone),
+                },
+              ],
+        )
+      : [
+          {
+            label: `Loading starts at ${timeline.from?.yardName ?? 'the first yard'}`,
+            time: formatLocalTime(w.loadingStart, w.origin.timeZone),
+          },
+        ]),
     { label: 'Departure', time: formatLocalTime(w.departure, w.origin.timeZone) },
     ...w.legs.map((leg, i) => ({
       label:

@@ -52,6 +52,7 @@ function TruckPage({
   units: Units;
 }) {
   const zone = sheet.timeline.window?.destination.timeZone;
+  const pickupOf = (yardId: string) => page.pickups?.find((p) => p.yardId === yardId);
   return (
     <section
       className="load-sheet-page mb-8 flex flex-col gap-4 rounded-lg bg-dusk-850 p-5 ring-1 ring-dusk-700"
@@ -95,7 +96,7 @@ function TruckPage({
             <th className="py-1 pr-2">Lot</th>
             <th className="py-1 pr-2 text-right">Pallets</th>
             <th className="py-1 pr-2 text-right">Colonies</th>
-            <th className="py-1 pr-2">Dusk</th>
+            <th className="py-1 pr-2">Dusk · load from</th>
             <th className="py-1 pr-2">Access</th>
             <th className="py-1">Loaded ✓</th>
           </tr>
@@ -108,7 +109,14 @@ function TruckPage({
               <td className="py-1 pr-2">{s.lotName}</td>
               <td className="py-1 pr-2 text-right tabular-nums">{formatCount(s.pallets)}</td>
               <td className="py-1 pr-2 text-right tabular-nums">{formatCount(s.colonies)}</td>
-              <td className="py-1 pr-2">{formatLocalTime(s.civilDusk, s.timeZone)}</td>
+              <td className="py-1 pr-2">
+                {formatLocalTime(s.civilDusk, s.timeZone)}
+                {pickupOf(s.yardId) && (
+                  <span className="block">
+                    load from {formatLocalTime(pickupOf(s.yardId)!.loadingStart, s.timeZone)}
+                  </span>
+                )}
+              </td>
               <td className="py-1 pr-2">{s.accessNotes || '—'}</td>
               <td className="py-1">______</td>
             </tr>

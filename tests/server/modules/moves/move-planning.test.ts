@@ -1,3 +1,4 @@
+import * as geographiclib from 'geographiclib-geodesic';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { signedInClient, startTestApp, type Client, type TestApp } from '../../../support/test-app';
 import { testPassword } from '../../../support/factories';
@@ -75,6 +76,39 @@ describe('POST /api/moves/preview', () => {
     expect(b.hiveWeightKg.source.kind).toBe('hive-setup');
     expect(plan.assumptions.join(' ')).toMatch(/no weighed hives/);
     expect(plan.warnings.map((x: { code: string }) => x.code)).toContain('weights-assumed');
+  });
+
+  it('when one truck calls at both yards then it drives between them and loads at each before it leaves the last', async () => {
+    const { body: plan } = await planner
+      .post(
+        '/api/moves/preview',
+        twoYardMove(w, {
+          origins: [
+            { yardId: w.yardA, lotId: w.weighedLot, colonies: 40 },
+            { yardId: w.yardB, lotId: w.unweighedLot, colonies: 20 },
+          ],
+        }),
+      )
+      .expect(200);
+    const [truck] = plan.loadSheet.trucks;
+    expect(truck.pickups.map((p: { yardId: string }) => p.yardId)).toEqual([w.yardA, w.yardB]);
+    const [first, second] = truck.pickups;
+    // Reference: geographiclib's WGS84 geodesic between the two yards (27.95 N 97.85 W and
+    // 28.3 N 98.1 W), times our road factor of 1.25; the sphere differs by well under 1 %.
+    const geodesicKm = geographiclib.Geodesic.WGS84.Inverse(27.95, -97.85, 28.3, -98.1).s12! / 1000;
+    expect(second.driveKm / 1.25).toBeCloseTo(geodesicKm, 0);
+    expect(second.driveMinutes).toBe(Math.round(((geodesicKm * 1.25) / 85) * 60));
+    // Loading at the first yard starts at its dusk; the second after 120 min loading and the drive.
+    expect(first.loadingStart).toBe(plan.timeline.originDusk[0].civilDusk);
+    const minutesBetween = (a: string, b: string) => (Date.parse(b) - Date.parse(a)) / 60_000;
+    expect(minutesBetween(first.loadingStart, second.loadingStart)).toBeCloseTo(
+      120 + second.driveMinutes,
+      0,
+    );
+    // It rolls from the last yard after loading there, and the timeline shows this truck's way.
+    expect(minutesBetween(second.loadingStart, truck.departure)).toBeCloseTo(120, 0);
+    expect(plan.timeline.pickups).toEqual(truck.pickups);
+    expect(plan.timeline.window.departure).toBe(truck.departure);
   });
 
   it('when the contract is only offered and one driver hauls Texas to California then it warns of both', async () => {
