@@ -2,7 +2,7 @@ import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { LoadCard } from '@/features/tonight/components/load-card';
-import { OfflineQueue } from '@/features/tonight/lib/offline-queue';
+import { OfflineQueue, type SendChanges } from '@/features/tonight/lib/offline-queue';
 import { memoryStorage } from '@/features/tonight/lib/storage';
 import type { NewChange } from '@/features/tonight/lib/offline-queue';
 import type { LoadRecord, TonightLoad, TonightMove } from '@/features/tonight/types';
@@ -118,7 +118,7 @@ describe('Tonight load card', () => {
   });
 });
 
-describe('Tonight queue at sign-out', () => {
+describe('Tonight queue on a shared phone', () => {
   it('when the device is forgotten then its changes and snapshots are gone', async () => {
     const storage = memoryStorage();
     const queue = new OfflineQueue(storage, vi.fn());
@@ -139,5 +139,42 @@ describe('Tonight queue at sign-out', () => {
     expect(await queue.unsent()).toBe(0);
     expect(await storage.listChanges()).toEqual([]);
     expect(await storage.loadSnapshot('2027-02-01')).toBeUndefined();
+  });
+  it("when another person signs in on the phone then the first one's changes are kept but not sent as them", async () => {
+    const send = vi.fn<SendChanges>(async (changes) => ({
+      results: changes.map((c, index) => ({
+        index,
+        idempotencyKey: c.idempotencyKey,
+        kind: c.kind,
+        moveId: c.moveId,
+        loadId: null,
+        outcome: 'applied' as const,
+        status: 200,
+        record: {},
+      })),
+    }));
+    const queue = new OfflineQueue(memoryStorage(), send);
+    const note = (text: string) => ({
+      kind: 'note' as const,
+      moveId: '11111111-1111-4111-8111-111111111111',
+      payload: { text },
+      label: text,
+    });
+    queue.setUser('crew-a');
+    await queue.enqueue(note('made by A'));
+    queue.setUser('crew-b');
+    await queue.enqueue(note('made by B'));
+    await queue.sync();
+    expect(send.mock.calls.flatMap(([changes]) => changes.map((c) => c.payload.text))).toEqual([
+      'made by B',
+    ]);
+    const [left] = queue.getState().changes;
+    expect(left).toMatchObject({ label: 'made by A', madeBy: 'crew-a', state: 'waiting' });
+    expect(queue.isOthers(left)).toBe(true);
+    // Back as A, it goes.
+    queue.setUser('crew-a');
+    await queue.sync();
+    expect(send.mock.calls.at(-1)![0].map((c) => c.payload.text)).toEqual(['made by A']);
+    expect(queue.getState().changes).toEqual([]);
   });
 });

@@ -183,4 +183,26 @@ describe('SyncBar', () => {
     });
     expect(await storage.listChanges()).toEqual([]);
   });
+  it('when someone else left a change on the phone then it is shown apart, not sent, and can be discarded', async () => {
+    const storage = memoryStorage();
+    const earlier = new OfflineQueue(storage, vi.fn());
+    earlier.setUser('someone-else');
+    await earlier.enqueue(counts(9));
+    mockFetch(() => ({ status: 200, body: {} }));
+    const send = vi.fn<SendChanges>();
+    const user = userEvent.setup();
+    renderWithProviders(
+      <TonightProvider storage={storage} send={send}>
+        <SyncBar />
+      </TonightProvider>,
+    );
+    const theirs = await screen.findByRole('region', {
+      name: 'Changes someone else left on this phone',
+    });
+    expect(within(theirs).getByText('Rig Amber: 9 pallets loaded')).toBeTruthy();
+    expect(screen.getByTestId('sync-status').textContent).toBe('Everything is sent');
+    expect(send).not.toHaveBeenCalled();
+    await user.click(within(theirs).getByRole('button', { name: 'Discard' }));
+    expect(await storage.listChanges()).toEqual([]);
+  });
 });

@@ -35,7 +35,7 @@ export function SignOutButton() {
     // Only the operation's people use Tonight; a grower's browser has no queue to ask about.
     if (!isStaff(user)) return finish();
     setChecking(true);
-    const waiting = await unsentTonightChanges().catch(() => 0);
+    const waiting = await unsentTonightChanges(user.id).catch(() => 0);
     setChecking(false);
     if (waiting > 0) setUnsent(waiting);
     else finish();

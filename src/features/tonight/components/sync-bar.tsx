@@ -6,8 +6,9 @@ export function SyncBar() {
   const { queue } = useTonightDevice();
   const state = useQueueState();
   const online = useOnline();
-  const waiting = state.changes.filter((c) => c.state === 'waiting');
-  const problems = state.changes.filter((c) => c.state !== 'waiting');
+  const others = state.changes.filter(queue.isOthers);
+  const waiting = state.changes.filter((c) => c.state === 'waiting' && !queue.isOthers(c));
+  const problems = state.changes.filter((c) => c.state !== 'waiting' && !queue.isOthers(c));
   return (
     <div className="flex flex-col gap-3">
       <div
@@ -38,6 +39,34 @@ export function SyncBar() {
           </button>
         )}
       </div>
+      {others.length > 0 && (
+        <section
+          className="tn-surface flex flex-col gap-3 border-2 tn-line p-3"
+          aria-label="Changes someone else left on this phone"
+        >
+          <h2 className="text-lg font-semibold">
+            Left on this phone by someone else: {others.length}
+          </h2>
+          <p className="tn-muted text-sm">
+            They go to the office only when the person who made them signs in here again.
+          </p>
+          {others.map((c) => (
+            <div
+              key={c.idempotencyKey}
+              className="flex flex-wrap items-center justify-between gap-2 border-t tn-line pt-2"
+            >
+              <p>{c.label}</p>
+              <button
+                type="button"
+                className="tn-button"
+                onClick={() => void queue.discard(c.idempotencyKey)}
+              >
+                Discard
+              </button>
+            </div>
+          ))}
+        </section>
+      )}
       {problems.length > 0 && (
         <section
           className="tn-surface tn-alert flex flex-col gap-3 border-2 p-3"

@@ -130,7 +130,9 @@ export function TonightScreen({ today, units }: { today: string; units: Units })
       sendTimer = window.setTimeout(() => void queue.sync(), 800);
     });
 
-  const moves = tonight.data ? applyPending(tonight.data.moves, queueState.changes) : [];
+  // Someone else's changes left on the phone are not laid over this person's view.
+  const mine = queueState.changes.filter((c) => !queue.isOthers(c));
+  const moves = tonight.data ? applyPending(tonight.data.moves, mine) : [];
   const cautions = new Map(moves.flatMap((m) => m.cautions).map((c) => [c.code, c]));
 
   return (

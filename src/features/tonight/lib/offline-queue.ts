@@ -46,6 +46,8 @@ export class OfflineQueue {
   private listeners = new Set<() => void>();
   private loaded: Promise<void> | null = null;
   private seq = 0;
+  /** Who is signed in: changes are stamped with them, and only theirs are sent. */
+  private userId: string | null = null;
 
   constructor(
     private readonly storage: TonightStorage,
@@ -59,6 +61,16 @@ export class OfflineQueue {
   };
 
   getState = () => this.state;
+
+  /** The signed-in user; others' changes left on the phone wait for them (or a discard). */
+  setUser(userId: string | null) {
+    if (this.userId === userId) return;
+    this.userId = userId;
+    this.set({});
+  }
+
+  /** A change made by someone other than the signed-in user (kept, not sent). */
+  isOthers = (change: QueuedChange) => Boolean(change.madeBy && change.madeBy !== this.userId);
 
   private set(patch: Partial<QueueState>) {
     this.state = { ...this.state, ...patch };
@@ -94,7 +106,8 @@ export class OfflineQueue {
           c.kind === 'load-counts' &&
           c.loadId === input.loadId &&
           c.state === 'waiting' &&
-          !c.attempted,
+          !c.attempted &&
+          !this.isOthers(c),
       );
       if (pending) {
         await this.save({
@@ -107,6 +120,7 @@ export class OfflineQueue {
     }
     await this.save({
       ...input,
+      ...(this.userId ? { madeBy: this.userId } : {}),
       idempotencyKey: newKey(),
       seq: ++this.seq,
       queuedAt: new Date().toISOString(),
@@ -155,7 +169,10 @@ export class OfflineQueue {
     let appliedAny = false;
     try {
       for (let round = 0; round < 50; round++) {
-        const waiting = this.state.changes.filter((c) => c.state === 'waiting');
+        // Sent as the signed-in user, so only their own changes go.
+        const waiting = this.state.changes.filter(
+          (c) => c.state === 'waiting' && !this.isOthers(c),
+        );
         if (waiting.length === 0) break;
         const seen = new Set<string>();
         const batch = waiting

@@ -13,6 +13,8 @@ export interface QueuedChange {
   /** The record's version the change was made on (load-counts and status). */
   baseVersion?: number;
   payload: Record<string, unknown>;
+  /** Who made it (user id): only they send it; absent on changes kept before this was recorded. */
+  madeBy?: string;
   /** What the crew did, in their words: "Semi 1: 12 pallets loaded". */
   label: string;
   queuedAt: string;

@@ -9,6 +9,7 @@ import {
 } from 'react';
 import { syncChanges } from '../api/sync-changes';
 import { tonightKeys } from '../api/keys';
+import { useUser } from '@/lib/auth';
 import { OfflineQueue, type SendChanges } from './offline-queue';
 import { deviceStorage, type TonightStorage } from './storage';
 
@@ -42,8 +43,9 @@ const API_CACHE = 'duskhaul-api';
  * Changes made in Tonight that the office does not have yet, after one last try to send them.
  * Sign-out asks before it throws them away.
  */
-export async function unsentTonightChanges(): Promise<number> {
+export async function unsentTonightChanges(userId: string): Promise<number> {
   const { queue } = sharedDevice();
+  queue.setUser(userId);
   if ((await queue.unsent()) > 0 && navigator.onLine !== false) await queue.sync();
   return queue.unsent();
 }
@@ -82,8 +84,10 @@ export function TonightProvider({
     return sharedDevice();
   });
 
+  const userId = useUser().id;
   useEffect(() => {
     const { queue } = device;
+    queue.setUser(userId);
     void queue.load().then(() => queue.sync());
     const onOnline = () => void queue.sync();
     window.addEventListener('online', onOnline);
@@ -96,7 +100,7 @@ export function TonightProvider({
       window.removeEventListener('online', onOnline);
       clearInterval(timer);
     };
-  }, [device]);
+  }, [device, userId]);
 
   return <TonightContext.Provider value={device}>{children}</TonightContext.Provider>;
 }
