@@ -46,7 +46,9 @@ echo "[test] type-check, lint and build…" >&2
 npx tsc --noEmit -p tsconfig.json || exit 1
 npx eslint . --max-warnings 0 || exit 1
 npx prettier --check . --log-level warn || exit 1
-npx vite build --logLevel warn || exit 1
+# The browser tests run against the production build (NODE_ENV=test would make Vite build a
+# development bundle without the service worker).
+NODE_ENV=production npx vite build --logLevel warn || exit 1
 
 mkdir -p test-output
 npx vitest run --reporter=default --reporter=json --outputFile.json=test-output/vitest.json "$@"
