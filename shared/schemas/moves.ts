@@ -107,6 +107,8 @@ export const dropPlacement = z.strictObject({
   colonies: z.number().int().min(0).max(100_000),
 });
 
+export type DropPlacement = z.infer<typeof dropPlacement>;
+
 const palletCount = z.number().int('A whole number.').min(0).max(10_000);
 
 /** Pallets loaded at one pick-up stop of a truck: a yard and the lot taken from it. */
@@ -128,6 +130,19 @@ export const loadRecordFields = z.strictObject({
   notes: text(4000).optional(),
 });
 export const loadRecordRequest = loadRecordFields.extend({ version });
+
+/** What the crew has recorded on one load, as the API presents it (moves, load sheet, Tonight). */
+export interface LoadRecord {
+  palletsLoaded: number | null;
+  palletsByStop: StopPalletCount[] | null;
+  coloniesPlaced: number | null;
+  coloniesLeftBehind: number | null;
+  coloniesLost: number | null;
+  placements: DropPlacement[] | null;
+  preRollCheck: PreRollCheck | null;
+  notes: string;
+  version: number;
+}
 export type LoadRecordRequest = z.infer<typeof loadRecordRequest>;
 
 /** Hive weights read off a scale while loading a move. */

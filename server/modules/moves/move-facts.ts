@@ -14,10 +14,9 @@ import {
   type DestinationFact,
   type OriginFact,
   type PlanFacts,
-  type StrengthSource,
   type TruckFact,
-  type WeightSource,
 } from './move-plan';
+import type { StrengthSource, WeightSource } from '../../../shared/schemas/move-plan';
 import { MovesRepository, promisingStatuses } from './moves.repository';
 
 type Db = DataSource | EntityManager;

@@ -1,19 +1,6 @@
 import { Column, Entity } from 'typeorm';
 import { TenantRecord } from '../../db/base-columns';
-
-/** One colony count set down at one drop, as the crew records it. */
-export interface DropPlacementRecord {
-  placeId: string;
-  drop?: string;
-  colonies: number;
-}
-
-/** Pallets the crew loaded at one pick-up stop (a yard and the lot taken from it). */
-export interface StopPalletCount {
-  yardId: string;
-  lotId: string;
-  pallets: number;
-}
+import type { DropPlacement, PreRollCheck, StopPalletCount } from '../../../shared/schemas/moves';
 
 /** One truck's part of a move: planned and recorded counts. */
 @Entity('move_loads')
@@ -33,8 +20,8 @@ export class MoveLoad extends TenantRecord {
   @Column({ type: 'integer', nullable: true }) coloniesPlaced: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLeftBehind: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLost: number | null;
-  @Column({ type: 'jsonb', nullable: true }) placements: DropPlacementRecord[] | null;
-  @Column({ type: 'jsonb', nullable: true }) preRollCheck: Record<string, unknown> | null;
+  @Column({ type: 'jsonb', nullable: true }) placements: DropPlacement[] | null;
+  @Column({ type: 'jsonb', nullable: true }) preRollCheck: PreRollCheck | null;
   @Column({ type: 'text' }) notes: string;
   @Column({ type: 'integer' }) version: number;
 }

@@ -3,7 +3,8 @@ import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
 import type { MovePreviewRequest } from '../../../shared/schemas/moves';
 import { availabilityOn, gatherPlanFacts, type PlanInput } from './move-facts';
-import { buildMovePlan, type MovePlan, type PlannedTruck } from './move-plan';
+import type { MovePlan, PlannedTruck } from '../../../shared/schemas/move-plan';
+import { buildMovePlan } from './move-plan';
 import type { MoveLoad } from './move-load.entity';
 import type { Move } from './move.entity';
 

@@ -2,8 +2,12 @@ import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
-import type { loadRecordFields, moveWeightsFields } from '../../../shared/schemas/moves';
-import { MoveLoad, type StopPalletCount } from './move-load.entity';
+import type {
+  loadRecordFields,
+  moveWeightsFields,
+  StopPalletCount,
+} from '../../../shared/schemas/moves';
+import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
 import { presentLoad } from './move-planning';
 import { moves } from './moves.service';

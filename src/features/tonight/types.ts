@@ -1,31 +1,5 @@
-import type {
-  MoveStatus,
-  PreRollCheck,
-  StopPalletCount,
-  SyncKind,
-  SyncOutcome,
-} from '@shared/schemas/moves';
-
-/** A drop's placement: colonies set down at one destination (and drop). */
-export interface Placement {
-  placeId: string;
-  drop?: string;
-  colonies: number;
-}
-
-/** What the crew records on a load. */
-export interface LoadRecord {
-  palletsLoaded: number | null;
-  /** Per pick-up stop; when present the truck's total is their sum. */
-  palletsByStop: StopPalletCount[] | null;
-  coloniesPlaced: number | null;
-  coloniesLeftBehind: number | null;
-  coloniesLost: number | null;
-  placements: Placement[] | null;
-  preRollCheck: PreRollCheck | null;
-  notes: string;
-  version: number;
-}
+import type { LoadRecord, MoveStatus, SyncKind, SyncOutcome } from '@shared/schemas/moves';
+export type { LoadRecord } from '@shared/schemas/moves';
 
 /** One truck of tonight's move, from the move's load sheet. */
 export interface TonightLoad {
