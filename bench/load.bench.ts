@@ -113,7 +113,8 @@ async function main() {
   const [owner, planner, crew, grower] = await Promise.all(
     ['owner@demo.test', 'planner@demo.test', 'crew@demo.test', 'grower@demo.test'].map(signIn),
   );
-  const before = {
+  /** What the writes under load leave behind, counted before and after for the reconciliation. */
+  const written = async () => ({
     ledger: (
       await one<{ n: number }>(`SELECT count(*)::int AS n FROM ledger_entries WHERE to_id = $1`, [
         benchYard.id,
@@ -130,7 +131,8 @@ async function main() {
         [operation.id],
       )
     ).n,
-  };
+  });
+  const before = await written();
   const ok = { ledger: 0, weights: 0, yards: 0 };
   const loadPlan = JSON.stringify({
     colonies: 416,
@@ -223,24 +225,8 @@ async function main() {
   });
   const mixedResult = summarise('mixed 70 % reads / 30 % writes', mixed);
 
-  const after = {
-    ledger: (
-      await one<{ n: number }>(`SELECT count(*)::int AS n FROM ledger_entries WHERE to_id = $1`, [
-        benchYard.id,
-      ])
-    ).n,
-    weights: (
-      await one<{ n: number }>(`SELECT count(*)::int AS n FROM weight_samples WHERE move_id = $1`, [
-        move.id,
-      ])
-    ).n,
-    yards: (
-      await one<{ n: number }>(
-        `SELECT count(*)::int AS n FROM yards WHERE operation_id = $1 AND name LIKE 'Bench created %'`,
-        [operation.id],
-      )
-    ).n,
-  };
+  const after = await written();
+
   const colonies = (
     await one<{ n: number }>(
       `SELECT COALESCE(SUM(colonies), 0)::int AS n FROM ledger_entries WHERE to_id = $1`,

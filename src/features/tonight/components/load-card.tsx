@@ -24,6 +24,31 @@ const deviceClock = (iso: string) =>
 const numberOrNull = (text: string) =>
   text.trim() === '' ? null : Math.max(0, Math.floor(Number(text)) || 0);
 
+/** A whole-number field with the phone's number pad. */
+function CountInput({
+  label,
+  value,
+  onChange,
+}: {
+  label: string;
+  value: string;
+  onChange: (value: string) => void;
+}) {
+  return (
+    <label className="flex flex-col gap-1">
+      <span>{label}</span>
+      <input
+        className="tn-input"
+        type="number"
+        min={0}
+        inputMode="numeric"
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+      />
+    </label>
+  );
+}
+
 /** One truck tonight: pick-ups, pallets loaded, weights, notes, and what was placed or lost. */
 export function LoadCard({ move, load, units, onChange }: Props) {
   const recorded = load.recorded;
@@ -226,17 +251,11 @@ export function LoadCard({ move, load, units, onChange }: Props) {
         <div className="mt-3 flex flex-col gap-3">
           {move.destinations.map((d) => (
             <div key={d.id} className="grid grid-cols-2 gap-2">
-              <label className="flex flex-col gap-1">
-                <span>Placed at {d.name}</span>
-                <input
-                  className="tn-input"
-                  inputMode="numeric"
-                  type="number"
-                  min={0}
-                  value={placed[d.id] ?? ''}
-                  onChange={(e) => setPlaced({ ...placed, [d.id]: e.target.value })}
-                />
-              </label>
+              <CountInput
+                label={`Placed at ${d.name}`}
+                value={placed[d.id] ?? ''}
+                onChange={(value) => setPlaced({ ...placed, [d.id]: value })}
+              />
               <label className="flex flex-col gap-1">
                 <span>Drop</span>
                 <input
@@ -250,28 +269,8 @@ export function LoadCard({ move, load, units, onChange }: Props) {
             </div>
           ))}
           <div className="grid grid-cols-2 gap-2">
-            <label className="flex flex-col gap-1">
-              <span>Left behind</span>
-              <input
-                className="tn-input"
-                type="number"
-                min={0}
-                inputMode="numeric"
-                value={leftBehind}
-                onChange={(e) => setLeftBehind(e.target.value)}
-              />
-            </label>
-            <label className="flex flex-col gap-1">
-              <span>Lost</span>
-              <input
-                className="tn-input"
-                type="number"
-                min={0}
-                inputMode="numeric"
-                value={lost}
-                onChange={(e) => setLost(e.target.value)}
-              />
-            </label>
+            <CountInput label="Left behind" value={leftBehind} onChange={setLeftBehind} />
+            <CountInput label="Lost" value={lost} onChange={setLost} />
           </div>
           <button type="button" className="tn-button tn-button-primary" onClick={savePlacements}>
             Keep placed counts
