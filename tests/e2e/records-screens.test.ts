@@ -151,15 +151,20 @@ describe('records screens in the browser', () => {
       .toBe(false);
     const stale = await hand.get(`${e2e.origin}/api/yards`);
     expect(stale.status()).toBe(401);
-    await page.context().clearCookies();
-    await page.goto(`${e2e.origin}/sign-in`);
-    await page.getByLabel(/e-?mail/i).fill('temp.hand@demo.test');
-    await page.getByLabel(/password/i).fill('a-long-first-passphrase');
-    await page.getByRole('button', { name: /sign in/i }).click();
-    await page.getByText('Wrong e-mail or password.').waitFor();
-    expect(page.url()).toContain('/sign-in');
-    await hand.dispose();
+    // The owner's page may still have a request in flight whose answer renews the session
+    // cookie; close it and let it settle before clearing cookies, or the owner stays signed in.
+    await page.waitForLoadState('networkidle');
     await page.close();
+    await e2e.browser.clearCookies();
+    const signInPage = await e2e.newPage();
+    await signInPage.goto(`${e2e.origin}/sign-in`);
+    await signInPage.getByLabel(/e-?mail/i).fill('temp.hand@demo.test');
+    await signInPage.getByLabel(/password/i).fill('a-long-first-passphrase');
+    await signInPage.getByRole('button', { name: /sign in/i }).click();
+    await signInPage.getByText('Wrong e-mail or password.').waitFor();
+    expect(signInPage.url()).toContain('/sign-in');
+    await hand.dispose();
+    await signInPage.close();
   });
 
   it('when the app is 390 px wide then every main screen fits without sideways scrolling', async () => {
