@@ -1,6 +1,6 @@
 import PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
-import type { PostgresDriver } from 'typeorm/driver/postgres/PostgresDriver.js';
+import { pgPool } from '../../db/data-source';
 
 /** The queues the product uses, with how often and how patiently each retries. */
 export const queues = {
@@ -46,9 +46,7 @@ export class JobQueue {
     db: DataSource,
     private readonly options: JobQueueOptions = {},
   ) {
-    const pool = (db.driver as PostgresDriver).master as {
-      query(text: string, values?: unknown[]): Promise<{ rows: unknown[] }>;
-    };
+    const pool = pgPool(db);
     const executor: Executor = { executeSql: (text, values) => pool.query(text, values) };
     this.executor = executor;
     this.boss = new PgBoss({
