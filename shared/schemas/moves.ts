@@ -117,6 +117,13 @@ export type StopPalletCount = z.infer<typeof stopPalletCount>;
 
 const colonyCount = z.number().int('A whole number.').min(0).max(100_000);
 
+/**
+ * Colonies left in the yard at one pick-up stop of a truck (too weak, no room, a broken pallet):
+ * they stay where they are, so the ledger keeps them in that yard.
+ */
+export const stopColonyCount = z.strictObject({ yardId: id, lotId: id, colonies: colonyCount });
+export type StopColonyCount = z.infer<typeof stopColonyCount>;
+
 /** What the crew records on one truck's load; every field optional, the load's version required. */
 export const loadRecordFields = z.strictObject({
   palletsLoaded: palletCount.nullish(),
@@ -124,6 +131,8 @@ export const loadRecordFields = z.strictObject({
   palletsByStop: z.array(stopPalletCount).max(100).nullish(),
   coloniesPlaced: colonyCount.nullish(),
   coloniesLeftBehind: colonyCount.nullish(),
+  /** Per pick-up stop; when given, coloniesLeftBehind is their sum (or must equal it). */
+  leftBehindByStop: z.array(stopColonyCount).max(100).nullish(),
   coloniesLost: colonyCount.nullish(),
   placements: z.array(dropPlacement).max(200).nullish(),
   preRollCheck: preRollCheck.nullish(),
@@ -137,6 +146,7 @@ export interface LoadRecord {
   palletsByStop: StopPalletCount[] | null;
   coloniesPlaced: number | null;
   coloniesLeftBehind: number | null;
+  leftBehindByStop: StopColonyCount[] | null;
   coloniesLost: number | null;
   placements: DropPlacement[] | null;
   preRollCheck: PreRollCheck | null;

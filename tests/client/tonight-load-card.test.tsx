@@ -41,6 +41,7 @@ function card(recorded: Partial<LoadRecord> = {}) {
       palletsByStop: null,
       coloniesPlaced: null,
       coloniesLeftBehind: null,
+      leftBehindByStop: null,
       coloniesLost: null,
       placements: null,
       preRollCheck: null,
@@ -94,6 +95,33 @@ describe('Tonight load card', () => {
     card({ palletsLoaded: 9 });
     expect(screen.getByTestId('pallets-loaded').textContent).toBe('Pallets loaded: 9 of 18');
     expect(screen.getByText(/9 were recorded for the whole truck/)).toBeTruthy();
+  });
+
+  it('when the crew leaves colonies behind at the second yard then the change carries them per stop and their sum', async () => {
+    const onChange = card();
+    await userEvent.click(screen.getByText('Placed, left behind, lost'));
+    expect(screen.queryByLabelText('Left behind')).toBeNull();
+    await userEvent.type(screen.getByLabelText('Left behind at Salt Lick'), '4');
+    await userEvent.type(screen.getByLabelText('Lost on the road'), '1');
+    await userEvent.click(screen.getByRole('button', { name: 'Keep placed counts' }));
+    expect(onChange.mock.calls[0][0].payload).toMatchObject({
+      coloniesLeftBehind: 4,
+      leftBehindByStop: [
+        { yardId: yardA, lotId: lotA, colonies: 0 },
+        { yardId: yardB, lotId: lotB, colonies: 4 },
+      ],
+      coloniesLost: 1,
+    });
+  });
+
+  it('when only a truck total was left behind on a two-stop truck then the crew is told giving it by yard replaces it', async () => {
+    const onChange = card({ coloniesLeftBehind: 2 });
+    expect(screen.getByText(/2 were recorded as left behind for the whole truck/)).toBeTruthy();
+    await userEvent.click(screen.getByText('Placed, left behind, lost'));
+    await userEvent.click(screen.getByRole('button', { name: 'Keep placed counts' }));
+    // Nothing given per yard: the truck's total stands (neither field is sent).
+    const { payload } = onChange.mock.calls[0][0];
+    expect(Object.keys(payload).sort()).toEqual(['coloniesLost', 'coloniesPlaced', 'placements']);
   });
 
   it('when the crew keeps the pre-roll check then the ticked items and the time go with it', async () => {

@@ -4,6 +4,7 @@ import { MovePlansAndFeeds1796190000000 } from './1796190000000-move-plans-and-f
 import { InvoicePayments1796200000000 } from './1796200000000-invoice-payments';
 import { PalletsByStop1796210000000 } from './1796210000000-pallets-by-stop';
 import { ColonyBalances1796220000000 } from './1796220000000-colony-balances';
+import { LeftBehindByStop1796230000000 } from './1796230000000-left-behind-by-stop';
 
 /** Migrations in the order they run. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   InvoicePayments1796200000000,
   PalletsByStop1796210000000,
   ColonyBalances1796220000000,
+  LeftBehindByStop1796230000000,
 ];

@@ -17,7 +17,7 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
   const [loads, yards, destinations, contract] = await Promise.all([
     db.query(
       `SELECT id, truck_id, driver_names, pallets_loaded, pallets_by_stop, colonies_placed, colonies_left_behind,
-              colonies_lost, placements, pre_roll_check, notes, version
+              left_behind_by_stop, colonies_lost, placements, pre_roll_check, notes, version
          FROM move_loads WHERE operation_id = $1 AND move_id = $2 ORDER BY position, id`,
       [actor.operationId, move.id],
     ) as Promise<Array<Record<string, unknown> & { id: string }>>,
@@ -135,6 +135,7 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
               palletsByStop: load.pallets_by_stop,
               coloniesPlaced: load.colonies_placed,
               coloniesLeftBehind: load.colonies_left_behind,
+              leftBehindByStop: load.left_behind_by_stop,
               coloniesLost: load.colonies_lost,
               placements: load.placements,
               preRollCheck: load.pre_roll_check,

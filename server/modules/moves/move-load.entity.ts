@@ -1,6 +1,11 @@
 import { Column, Entity } from 'typeorm';
 import { TenantRecord } from '../../db/base-columns';
-import type { DropPlacement, PreRollCheck, StopPalletCount } from '../../../shared/schemas/moves';
+import type {
+  DropPlacement,
+  PreRollCheck,
+  StopColonyCount,
+  StopPalletCount,
+} from '../../../shared/schemas/moves';
 
 /** One truck's part of a move: planned and recorded counts. */
 @Entity('move_loads')
@@ -19,6 +24,8 @@ export class MoveLoad extends TenantRecord {
   @Column({ type: 'jsonb', nullable: true }) palletsByStop: StopPalletCount[] | null;
   @Column({ type: 'integer', nullable: true }) coloniesPlaced: number | null;
   @Column({ type: 'integer', nullable: true }) coloniesLeftBehind: number | null;
+  /** Left behind per pick-up stop; `coloniesLeftBehind` is their sum when these are given. */
+  @Column({ type: 'jsonb', nullable: true }) leftBehindByStop: StopColonyCount[] | null;
   @Column({ type: 'integer', nullable: true }) coloniesLost: number | null;
   @Column({ type: 'jsonb', nullable: true }) placements: DropPlacement[] | null;
   @Column({ type: 'jsonb', nullable: true }) preRollCheck: PreRollCheck | null;

@@ -10,6 +10,12 @@ import type { Move } from './move.entity';
 
 type Db = DataSource | EntityManager;
 
+/** The pick-up stops (yard and lot) of a load's saved plan; null for a load saved without one. */
+export function plannedStopsOf(load: MoveLoad): Array<{ yardId: string; lotId: string }> | null {
+  const plan = load.plan as { stops?: Array<{ yardId: string; lotId: string }> } | null;
+  return plan?.stops ?? null;
+}
+
 /** A load as every staff role sees it (there is no money on a load). */
 export function presentLoad(l: MoveLoad) {
   return {
@@ -24,6 +30,7 @@ export function presentLoad(l: MoveLoad) {
     palletsByStop: l.palletsByStop,
     coloniesPlaced: l.coloniesPlaced,
     coloniesLeftBehind: l.coloniesLeftBehind,
+    leftBehindByStop: l.leftBehindByStop,
     coloniesLost: l.coloniesLost,
     placements: l.placements,
     preRollCheck: l.preRollCheck,

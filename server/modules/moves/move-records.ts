@@ -2,14 +2,10 @@ import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
-import type {
-  loadRecordFields,
-  moveWeightsFields,
-  StopPalletCount,
-} from '../../../shared/schemas/moves';
+import type { loadRecordFields, moveWeightsFields } from '../../../shared/schemas/moves';
 import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
-import { presentLoad } from './move-planning';
+import { plannedStopsOf, presentLoad } from './move-planning';
 import { moves } from './moves.service';
 
 type LoadRecordFields = z.infer<typeof loadRecordFields>;
@@ -40,20 +36,23 @@ async function loadOf(tx: EntityManager, actor: Actor, moveId: string, loadId: s
 
 /** The pick-up stops (yard and lot) of one load: from its saved plan, else the move's origins. */
 async function stopsOf(tx: EntityManager, actor: Actor, moveId: string, load: MoveLoad) {
-  const planned = (load.plan as { stops?: Array<{ yardId: string; lotId: string }> } | null)?.stops;
   const stops =
-    planned ??
+    plannedStopsOf(load) ??
     (await tx.getRepository(MoveOrigin).findBy({ moveId, operationId: actor.operationId }));
   return new Set(stops.map((s) => `${s.yardId}:${s.lotId}`));
 }
 
-/** Checks per-stop pallet counts against the load's stops and returns their sum. */
-async function palletsByStopTotal(
+/**
+ * Checks counts given per pick-up stop (`field` names them in errors) against the load's stops:
+ * each must be one of the truck's stops, and none counted twice.
+ */
+async function checkStops(
   tx: EntityManager,
   actor: Actor,
   moveId: string,
   load: MoveLoad,
-  counts: StopPalletCount[],
+  field: 'palletsByStop' | 'leftBehindByStop',
+  counts: Array<{ yardId: string; lotId: string }>,
 ) {
   const stops = await stopsOf(tx, actor, moveId, load);
   const seen = new Set<string>();
@@ -61,17 +60,39 @@ async function palletsByStopTotal(
     const stop = `${c.yardId}:${c.lotId}`;
     if (!stops.has(stop)) {
       throw AppError.validation([
-        { field: `palletsByStop.${i}`, message: 'Not a pick-up stop of this truck.' },
+        { field: `${field}.${i}`, message: 'Not a pick-up stop of this truck.' },
       ]);
     }
     if (seen.has(stop)) {
       throw AppError.validation([
-        { field: `palletsByStop.${i}`, message: 'This stop is counted twice.' },
+        { field: `${field}.${i}`, message: 'This stop is counted twice.' },
       ]);
     }
     seen.add(stop);
   });
-  return counts.reduce((sum, c) => sum + c.pallets, 0);
+}
+
+/**
+ * A truck's total from its parts (stops or drops): the parts' sum when no total is given, or a 400
+ * when both are given and disagree.
+ */
+function totalOfParts(
+  field: string,
+  total: number | null | undefined,
+  sum: number,
+  parts: string,
+): number {
+  if (total === undefined || total === null) return sum;
+  if (total !== sum) {
+    throw AppError.validation([{ field, message: `${parts} add up to ${sum}, not ${total}.` }]);
+  }
+  return total;
+}
+
+/** A per-stop list replaces the old one; a bare truck total clears the stops it may not match. */
+function stopsToStore<T>(byStop: T[] | null | undefined, total: number | null | undefined) {
+  if (byStop !== undefined) return byStop;
+  return total !== undefined ? null : undefined;
 }
 
 /** A 409 that carries the current load, so the device can show what it conflicts with. */
@@ -98,15 +119,16 @@ export const moveRecords = {
     const move = await recordableMove(tx, actor, moveId);
     const load = await loadOf(tx, actor, moveId, loadId);
     let palletsLoaded = fields.palletsLoaded;
-    const palletsByStop = fields.palletsByStop ?? undefined;
-    if (palletsByStop) {
-      const sum = await palletsByStopTotal(tx, actor, moveId, load, palletsByStop);
-      if (palletsLoaded === undefined || palletsLoaded === null) palletsLoaded = sum;
-      else if (palletsLoaded !== sum) {
-        throw AppError.validation([
-          { field: 'palletsLoaded', message: `The stops add up to ${sum}, not ${palletsLoaded}.` },
-        ]);
-      }
+    if (fields.palletsByStop) {
+      await checkStops(tx, actor, moveId, load, 'palletsByStop', fields.palletsByStop);
+      const sum = fields.palletsByStop.reduce((total, c) => total + c.pallets, 0);
+      palletsLoaded = totalOfParts('palletsLoaded', palletsLoaded, sum, 'The stops');
+    }
+    let coloniesLeftBehind = fields.coloniesLeftBehind;
+    if (fields.leftBehindByStop) {
+      await checkStops(tx, actor, moveId, load, 'leftBehindByStop', fields.leftBehindByStop);
+      const sum = fields.leftBehindByStop.reduce((total, c) => total + c.colonies, 0);
+      coloniesLeftBehind = totalOfParts('coloniesLeftBehind', coloniesLeftBehind, sum, 'The stops');
     }
     const placements = fields.placements ?? undefined;
     let coloniesPlaced = fields.coloniesPlaced;
@@ -118,28 +140,15 @@ export const moveRecords = {
           ]);
         }
       });
-      const sum = placements.reduce((s, p) => s + p.colonies, 0);
-      if (coloniesPlaced === undefined || coloniesPlaced === null) coloniesPlaced = sum;
-      else if (coloniesPlaced !== sum) {
-        throw AppError.validation([
-          {
-            field: 'coloniesPlaced',
-            message: `The drops add up to ${sum}, not ${coloniesPlaced}.`,
-          },
-        ]);
-      }
+      const sum = placements.reduce((total, p) => total + p.colonies, 0);
+      coloniesPlaced = totalOfParts('coloniesPlaced', coloniesPlaced, sum, 'The drops');
     }
     const set: Record<string, unknown> = {
       palletsLoaded,
-      // A bare truck total replaces any per-stop counts it no longer agrees with.
-      palletsByStop:
-        fields.palletsByStop !== undefined
-          ? fields.palletsByStop
-          : fields.palletsLoaded !== undefined
-            ? null
-            : undefined,
+      palletsByStop: stopsToStore(fields.palletsByStop, fields.palletsLoaded),
       coloniesPlaced,
-      coloniesLeftBehind: fields.coloniesLeftBehind,
+      coloniesLeftBehind,
+      leftBehindByStop: stopsToStore(fields.leftBehindByStop, fields.coloniesLeftBehind),
       coloniesLost: fields.coloniesLost,
       placements: placements === undefined ? undefined : placements,
       preRollCheck: fields.preRollCheck === undefined ? undefined : fields.preRollCheck,

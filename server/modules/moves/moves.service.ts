@@ -21,8 +21,9 @@ import { Move } from './move.entity';
 import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
 import { MovesRepository, promisingStatuses } from './moves.repository';
-import { presentLoad, storeMovePlan } from './move-planning';
+import { plannedStopsOf, presentLoad, storeMovePlan } from './move-planning';
 import { apportion } from '../../../shared/domain/apportion';
+import { splitLeftAndLost } from '../../../shared/domain/placement-split';
 
 export const moves = new TenantRepository(Move, 'Move');
 const ledger = new LedgerRepository();
@@ -297,29 +298,35 @@ export class MovesService {
    * Writes what the crew recorded into the ledger: colonies left behind stay in their yard (no
    * entry), colonies lost on the way leave their yard as a loss, and the rest move to the
    * destinations — in the proportions of the recorded placements per destination, or evenly when
-   * none were recorded. Left-behind and lost colonies are taken from the origins in proportion to
-   * what each contributed (largest remainder), since the crew count them per truck, not per yard.
+   * none were recorded. `splitLeftAndLost` decides which origins the left-behind and lost come from.
    */
   private async writePlacement(tx: EntityManager, actor: Actor, move: Move, origins: MoveOrigin[]) {
     const loads = await tx
       .getRepository(MoveLoad)
       .find({ where: { operationId: actor.operationId, moveId: move.id } });
-    const planned = origins.map((o) => o.colonies);
-    const total = planned.reduce((a, b) => a + b, 0);
-    const leftBehind = loads.reduce((sum, l) => sum + (l.coloniesLeftBehind ?? 0), 0);
-    const lost = loads.reduce((sum, l) => sum + (l.coloniesLost ?? 0), 0);
-    if (leftBehind + lost > total) {
+    const split = splitLeftAndLost(
+      origins,
+      loads.map((l) => ({ ...l, stops: plannedStopsOf(l) ?? [] })),
+    );
+    if (!split.ok) {
+      if ('origin' in split) {
+        const origin = origins[split.origin];
+        const [yard] = (await tx.query(`SELECT name FROM yards WHERE id = $1`, [
+          origin.yardId,
+        ])) as Array<{ name: string }>;
+        throw new AppError(
+          409,
+          'conflict',
+          `The loads record ${split.leftBehind} colonies left behind at ${yard?.name ?? 'one yard'}, more than the ${origin.colonies} this move takes from it.`,
+        );
+      }
       throw new AppError(
         409,
         'conflict',
-        `The loads record ${leftBehind} left behind and ${lost} lost, more than the ${total} colonies of this move.`,
+        `The loads record ${split.leftBehind} left behind and ${split.lost} lost, more than the ${split.total} colonies of this move.`,
       );
     }
-    const leftPer = apportion(leftBehind, planned);
-    const lostPer = apportion(
-      lost,
-      planned.map((p, i) => p - leftPer[i]),
-    );
+    const { leftBehind: leftPer, lost: lostPer } = split;
 
     const destinations = move.destinationIds;
     const recorded = new Map<string, number>();

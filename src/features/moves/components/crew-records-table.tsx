@@ -59,9 +59,10 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
                 </td>
               </tr>
               {page.stops.map((stop) => {
-                const loaded = byStop?.find(
-                  (c) => c.yardId === stop.yardId && c.lotId === stop.lotId,
-                )?.pallets;
+                const atStop = (c: { yardId: string; lotId: string }) =>
+                  c.yardId === stop.yardId && c.lotId === stop.lotId;
+                const loaded = byStop?.find(atStop)?.pallets;
+                const left = recorded.leftBehindByStop?.find(atStop)?.colonies;
                 return (
                   <tr key={`${stop.yardId}-${stop.lotId}`} data-crew-stop={stop.yardName}>
                     <td className="py-1 pr-3 pl-4 text-dusk-200">
@@ -73,7 +74,10 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
                     <td className="py-1 pr-3 text-right text-dusk-200">
                       {byStop ? count(loaded ?? 0) : '—'}
                     </td>
-                    <td colSpan={2} />
+                    <td />
+                    <td className="py-1 pr-3 text-dusk-200" data-testid="stop-left-behind">
+                      {left ? `${formatCount(left)} left in this yard` : ''}
+                    </td>
                   </tr>
                 );
               })}

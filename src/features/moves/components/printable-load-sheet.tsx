@@ -98,7 +98,8 @@ function TruckPage({
             <th className="py-1 pr-2 text-right">Colonies</th>
             <th className="py-1 pr-2">Dusk · load from</th>
             <th className="py-1 pr-2">Access</th>
-            <th className="py-1">Loaded ✓</th>
+            <th className="py-1 pr-2">Loaded ✓</th>
+            <th className="py-1">Left in yard</th>
           </tr>
         </thead>
         <tbody>
@@ -118,6 +119,7 @@ function TruckPage({
                 )}
               </td>
               <td className="py-1 pr-2">{s.accessNotes || '—'}</td>
+              <td className="py-1 pr-2">______</td>
               <td className="py-1">______</td>
             </tr>
           ))}
@@ -150,7 +152,7 @@ function TruckPage({
       </p>
       <p className="text-sm">
         Pallets loaded per yard: {page.stops.map((s) => `${s.yardName} ______`).join(' · ')} ·
-        Placed: ______ colonies · left behind ______ · lost ______
+        Placed: ______ colonies · lost on the road ______
       </p>
     </section>
   );

@@ -111,12 +111,43 @@ export function LoadCard({ move, load, units, onChange }: Props) {
       ]),
     ),
   );
-  const [leftBehind, setLeftBehind] = useState(String(recorded.coloniesLeftBehind ?? ''));
+  // Colonies left behind are counted per pick-up stop, so the ledger keeps them in their yard; a
+  // truck total recorded without stops stands for the only stop of a one-stop truck.
+  const leftByStop = recorded.leftBehindByStop;
+  const leftAt = (stop: TonightLoad['stops'][number]) =>
+    leftByStop?.find((c) => c.yardId === stop.yardId && c.lotId === stop.lotId)?.colonies ??
+    (!leftByStop && load.stops.length === 1 ? recorded.coloniesLeftBehind : null);
+  const [leftBehind, setLeftBehind] = useState<string[]>(() =>
+    load.stops.map((stop) => String(leftAt(stop) ?? '')),
+  );
+  const truckTotalOnly =
+    !leftByStop && recorded.coloniesLeftBehind !== null && load.stops.length > 1;
+  const [leftOnTruck, setLeftOnTruck] = useState(String(recorded.coloniesLeftBehind ?? ''));
   const [lost, setLost] = useState(String(recorded.coloniesLost ?? ''));
   const [weightStop, setWeightStop] = useState(0);
   const [weights, setWeights] = useState('');
   const [note, setNote] = useState('');
   const [saidSaved, setSaidSaved] = useState<string | null>(null);
+
+  const leftBehindFields = () => {
+    if (load.stops.length === 0) return { coloniesLeftBehind: numberOrNull(leftOnTruck) };
+    if (leftBehind.every((text) => text.trim() === '')) {
+      // A truck total from before stays until it is given by yard.
+      return truckTotalOnly ? {} : { coloniesLeftBehind: null, leftBehindByStop: null };
+    }
+    const leftBehindByStop = load.stops.map((stop, i) => ({
+      yardId: stop.yardId,
+      lotId: stop.lotId,
+      colonies: numberOrNull(leftBehind[i]) ?? 0,
+    }));
+    const coloniesLeftBehind = leftBehindByStop.reduce((sum, c) => sum + c.colonies, 0);
+    return { coloniesLeftBehind, leftBehindByStop };
+  };
+  /** "Salt Lick", or "Salt Lick (Two deeps)" when the truck takes two lots from that yard. */
+  const stopName = (stop: TonightLoad['stops'][number]) =>
+    load.stops.filter((s) => s.yardId === stop.yardId).length > 1
+      ? `${stop.yardName} (${stop.lotName})`
+      : stop.yardName;
 
   const savePlacements = () => {
     const placements = move.destinations
@@ -131,7 +162,7 @@ export function LoadCard({ move, load, units, onChange }: Props) {
       {
         placements,
         coloniesPlaced,
-        coloniesLeftBehind: numberOrNull(leftBehind),
+        ...leftBehindFields(),
         coloniesLost: numberOrNull(lost),
       },
       `${coloniesPlaced} colonies placed`,
@@ -268,9 +299,28 @@ export function LoadCard({ move, load, units, onChange }: Props) {
               </label>
             </div>
           ))}
+          {truckTotalOnly && (
+            <p className="tn-muted text-sm">
+              {recorded.coloniesLeftBehind} were recorded as left behind for the whole truck; giving
+              them by yard below replaces that total.
+            </p>
+          )}
           <div className="grid grid-cols-2 gap-2">
-            <CountInput label="Left behind" value={leftBehind} onChange={setLeftBehind} />
-            <CountInput label="Lost" value={lost} onChange={setLost} />
+            {load.stops.length === 0 ? (
+              <CountInput label="Left behind" value={leftOnTruck} onChange={setLeftOnTruck} />
+            ) : (
+              load.stops.map((stop, i) => (
+                <CountInput
+                  key={`${stop.yardId}-${stop.lotId}`}
+                  label={`Left behind at ${stopName(stop)}`}
+                  value={leftBehind[i] ?? ''}
+                  onChange={(value) =>
+                    setLeftBehind(leftBehind.map((text, j) => (j === i ? value : text)))
+                  }
+                />
+              ))
+            )}
+            <CountInput label="Lost on the road" value={lost} onChange={setLost} />
           </div>
           <button type="button" className="tn-button tn-button-primary" onClick={savePlacements}>
             Keep placed counts

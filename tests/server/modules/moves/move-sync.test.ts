@@ -49,6 +49,29 @@ const ledgerOf = async (moveId: string) =>
     [moveId],
   );
 
+/** The truck of a planned move that calls at both yards, and load-counts changes on it. */
+async function twoStopTruck(moveId: string) {
+  const { body: full } = await planner.get(`/api/moves/${moveId}`).expect(200);
+  const load = full.loads.find(
+    (l: { plan: { stops: unknown[] } }) => l.plan.stops.length === 2,
+  ) as { id: string; version: number; plan: { stops: Array<{ yardId: string; lotId: string }> } };
+  expect(load, 'one truck calls at both yards').toBeDefined();
+  const [first, second] = load.plan.stops.map(({ yardId, lotId }) => ({ yardId, lotId }));
+  const counts = (payload: Record<string, unknown>) => ({
+    idempotencyKey: randomUUID(),
+    kind: 'load-counts',
+    moveId,
+    loadId: load.id,
+    version: load.version,
+    payload,
+  });
+  return { load, first, second, counts };
+}
+
+/** The crew's sync of `changes`, answered 200; its per-change results. */
+const crewSync = async (changes: unknown[]) =>
+  (await crew.post('/api/moves/sync', { changes }).expect(200)).body.results;
+
 describe('POST /api/moves/sync', () => {
   it('when the same batch is sent twice then it applies once and the second answer says duplicate', async () => {
     const move = await plannedMove('2027-02-02');
@@ -323,34 +346,17 @@ describe('POST /api/moves/sync', () => {
   });
   it('when the crew counts pallets per pick-up yard then the truck total is their sum, and a stop the truck does not make is refused', async () => {
     const move = await plannedMove('2027-02-14', [40, 20]);
-    const { body: full } = await planner.get(`/api/moves/${move.id}`).expect(200);
-    const load = full.loads.find(
-      (l: { plan: { stops: unknown[] } }) => l.plan.stops.length === 2,
-    ) as { id: string; version: number; plan: { stops: Array<{ yardId: string; lotId: string }> } };
-    expect(load, 'one truck calls at both yards').toBeDefined();
-    const [first, second] = load.plan.stops.map(({ yardId, lotId }) => ({ yardId, lotId }));
-    const counts = (palletsByStop: unknown, extra: Record<string, unknown> = {}) => ({
-      idempotencyKey: randomUUID(),
-      kind: 'load-counts',
-      moveId: move.id,
-      loadId: load.id,
-      version: load.version,
-      payload: { palletsByStop, ...extra },
-    });
-    const refused = (
-      await crew
-        .post('/api/moves/sync', {
-          changes: [
-            counts([{ yardId: w.yardA, lotId: w.unweighedLot, pallets: 3 }]),
-            counts([
-              { ...first, pallets: 3 },
-              { ...first, pallets: 1 },
-            ]),
-            counts([{ ...first, pallets: 3 }], { palletsLoaded: 4 }),
-          ],
-        })
-        .expect(200)
-    ).body.results;
+    const { load, first, second, counts } = await twoStopTruck(move.id);
+    const refused = await crewSync([
+      counts({ palletsByStop: [{ yardId: w.yardA, lotId: w.unweighedLot, pallets: 3 }] }),
+      counts({
+        palletsByStop: [
+          { ...first, pallets: 3 },
+          { ...first, pallets: 1 },
+        ],
+      }),
+      counts({ palletsByStop: [{ ...first, pallets: 3 }], palletsLoaded: 4 }),
+    ]);
     expect(
       refused.map(
         (r: { error: { details: Array<{ field: string }> } }) => r.error.details[0].field,
@@ -366,18 +372,14 @@ describe('POST /api/moves/sync', () => {
       version: load.version,
     });
 
-    const [applied] = (
-      await crew
-        .post('/api/moves/sync', {
-          changes: [
-            counts([
-              { ...first, pallets: 5 },
-              { ...second, pallets: 2 },
-            ]),
-          ],
-        })
-        .expect(200)
-    ).body.results;
+    const [applied] = await crewSync([
+      counts({
+        palletsByStop: [
+          { ...first, pallets: 5 },
+          { ...second, pallets: 2 },
+        ],
+      }),
+    ]);
     expect(applied.record).toMatchObject({
       palletsLoaded: 7,
       palletsByStop: [
@@ -404,5 +406,56 @@ describe('POST /api/moves/sync', () => {
       [load.id],
     );
     expect(after).toEqual({ pallets_loaded: 6, pallets_by_stop: null });
+  });
+  it('when the crew record colonies left behind at one yard of a two-yard truck then placing keeps exactly those in that yard', async () => {
+    const planned = { [w.yardA]: 40, [w.yardB]: 20 };
+    const move = await plannedMove('2027-02-16', [planned[w.yardA], planned[w.yardB]]);
+    const { first, second, counts } = await twoStopTruck(move.id);
+    const refused = await crewSync([
+      counts({ leftBehindByStop: [{ yardId: w.yardA, lotId: w.yardA, colonies: 3 }] }),
+      counts({ leftBehindByStop: [{ ...first, colonies: 3 }], coloniesLeftBehind: 5 }),
+    ]);
+    expect(
+      refused.map(
+        (r: { error: { details: Array<{ field: string; message: string }> } }) =>
+          r.error.details[0],
+      ),
+    ).toEqual([
+      { field: 'leftBehindByStop.0', message: 'Not a pick-up stop of this truck.' },
+      { field: 'coloniesLeftBehind', message: 'The stops add up to 3, not 5.' },
+    ]);
+
+    const [applied] = await crewSync([
+      counts({
+        leftBehindByStop: [
+          { ...first, colonies: 3 },
+          { ...second, colonies: 0 },
+        ],
+      }),
+    ]);
+    expect(applied.record).toMatchObject({
+      coloniesLeftBehind: 3,
+      leftBehindByStop: [
+        { ...first, colonies: 3 },
+        { ...second, colonies: 0 },
+      ],
+    });
+    let version = move.version;
+    for (const status of ['loading', 'rolling', 'placed']) {
+      version = (await crew.post(`/api/moves/${move.id}/status`, { version, status }).expect(200))
+        .body.version;
+    }
+    // Shared out over both origins (40 : 20) the 3 would leave 2 in one yard and 1 in the other;
+    // counted per stop, all 3 stay in the yard they were left in.
+    const movedFrom = async (yardId: string) =>
+      (
+        await t.db.query(
+          `SELECT coalesce(sum(colonies), 0)::int AS n FROM ledger_entries
+            WHERE move_id = $1 AND kind = 'move' AND from_id = $2`,
+          [move.id, yardId],
+        )
+      )[0].n;
+    expect(await movedFrom(first.yardId)).toBe(planned[first.yardId] - 3);
+    expect(await movedFrom(second.yardId)).toBe(planned[second.yardId]);
   });
 });
