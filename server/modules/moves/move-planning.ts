@@ -3,16 +3,16 @@ import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
 import type { MovePreviewRequest } from '../../../shared/schemas/moves';
 import { availabilityOn, gatherPlanFacts, type PlanInput } from './move-facts';
-import type { MovePlan, PlannedTruck } from '../../../shared/schemas/move-plan';
+import type { MovePlan, PlannedStop, PlannedTruck } from '../../../shared/schemas/move-plan';
 import { buildMovePlan } from './move-plan';
 import type { MoveLoad } from './move-load.entity';
 import type { Move } from './move.entity';
 
 type Db = DataSource | EntityManager;
 
-/** The pick-up stops (yard and lot) of a load's saved plan; null for a load saved without one. */
-export function plannedStopsOf(load: MoveLoad): Array<{ yardId: string; lotId: string }> | null {
-  const plan = load.plan as { stops?: Array<{ yardId: string; lotId: string }> } | null;
+/** The pick-up stops of a load's saved plan; null for a load saved without one. */
+export function plannedStopsOf(load: MoveLoad): PlannedStop[] | null {
+  const plan = load.plan as { stops?: PlannedStop[] } | null;
   return plan?.stops ?? null;
 }
 

@@ -34,17 +34,22 @@ async function loadOf(tx: EntityManager, actor: Actor, moveId: string, loadId: s
   return load;
 }
 
-/** The pick-up stops (yard and lot) of one load: from its saved plan, else the move's origins. */
+const stopKey = (s: { yardId: string; lotId: string }) => `${s.yardId}:${s.lotId}`;
+
+/**
+ * The pick-up stops (yard and lot) of one load with the colonies it takes at each: from its saved
+ * plan, else the move's origins (whole origins, an upper bound for one truck).
+ */
 async function stopsOf(tx: EntityManager, actor: Actor, moveId: string, load: MoveLoad) {
   const stops =
     plannedStopsOf(load) ??
     (await tx.getRepository(MoveOrigin).findBy({ moveId, operationId: actor.operationId }));
-  return new Set(stops.map((s) => `${s.yardId}:${s.lotId}`));
+  return new Map(stops.map((s) => [stopKey(s), s.colonies]));
 }
 
 /**
  * Checks counts given per pick-up stop (`field` names them in errors) against the load's stops:
- * each must be one of the truck's stops, and none counted twice.
+ * each must be one of the truck's stops, and none counted twice. Returns the stops.
  */
 async function checkStops(
   tx: EntityManager,
@@ -57,7 +62,7 @@ async function checkStops(
   const stops = await stopsOf(tx, actor, moveId, load);
   const seen = new Set<string>();
   counts.forEach((c, i) => {
-    const stop = `${c.yardId}:${c.lotId}`;
+    const stop = stopKey(c);
     if (!stops.has(stop)) {
       throw AppError.validation([
         { field: `${field}.${i}`, message: 'Not a pick-up stop of this truck.' },
@@ -70,6 +75,7 @@ async function checkStops(
     }
     seen.add(stop);
   });
+  return stops;
 }
 
 /**
@@ -126,8 +132,20 @@ export const moveRecords = {
     }
     let coloniesLeftBehind = fields.coloniesLeftBehind;
     if (fields.leftBehindByStop) {
-      await checkStops(tx, actor, moveId, load, 'leftBehindByStop', fields.leftBehindByStop);
-      const sum = fields.leftBehindByStop.reduce((total, c) => total + c.colonies, 0);
+      const byStop = fields.leftBehindByStop;
+      const stops = await checkStops(tx, actor, moveId, load, 'leftBehindByStop', byStop);
+      byStop.forEach((c, i) => {
+        const planned = stops.get(stopKey(c)) ?? 0;
+        if (c.colonies > planned) {
+          throw AppError.validation([
+            {
+              field: `leftBehindByStop.${i}.colonies`,
+              message: `More than the ${planned} colonies this truck takes here.`,
+            },
+          ]);
+        }
+      });
+      const sum = byStop.reduce((total, c) => total + c.colonies, 0);
       coloniesLeftBehind = totalOfParts('coloniesLeftBehind', coloniesLeftBehind, sum, 'The stops');
     }
     const placements = fields.placements ?? undefined;

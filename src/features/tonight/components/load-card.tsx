@@ -28,10 +28,12 @@ const numberOrNull = (text: string) =>
 function CountInput({
   label,
   value,
+  max,
   onChange,
 }: {
   label: string;
   value: string;
+  max?: number;
   onChange: (value: string) => void;
 }) {
   return (
@@ -41,6 +43,7 @@ function CountInput({
         className="tn-input"
         type="number"
         min={0}
+        max={max}
         inputMode="numeric"
         value={value}
         onChange={(e) => onChange(e.target.value)}
@@ -314,6 +317,7 @@ export function LoadCard({ move, load, units, onChange }: Props) {
                   key={`${stop.yardId}-${stop.lotId}`}
                   label={`Left behind at ${stopName(stop)}`}
                   value={leftBehind[i] ?? ''}
+                  max={stop.colonies}
                   onChange={(value) =>
                     setLeftBehind(leftBehind.map((text, j) => (j === i ? value : text)))
                   }

@@ -410,10 +410,12 @@ describe('POST /api/moves/sync', () => {
   it('when the crew record colonies left behind at one yard of a two-yard truck then placing keeps exactly those in that yard', async () => {
     const planned = { [w.yardA]: 40, [w.yardB]: 20 };
     const move = await plannedMove('2027-02-16', [planned[w.yardA], planned[w.yardB]]);
-    const { first, second, counts } = await twoStopTruck(move.id);
+    const { load, first, second, counts } = await twoStopTruck(move.id);
+    const secondStop = (load.plan.stops as Array<{ colonies: number }>)[1];
     const refused = await crewSync([
       counts({ leftBehindByStop: [{ yardId: w.yardA, lotId: w.yardA, colonies: 3 }] }),
       counts({ leftBehindByStop: [{ ...first, colonies: 3 }], coloniesLeftBehind: 5 }),
+      counts({ leftBehindByStop: [{ ...second, colonies: 500 }] }),
     ]);
     expect(
       refused.map(
@@ -423,6 +425,10 @@ describe('POST /api/moves/sync', () => {
     ).toEqual([
       { field: 'leftBehindByStop.0', message: 'Not a pick-up stop of this truck.' },
       { field: 'coloniesLeftBehind', message: 'The stops add up to 3, not 5.' },
+      {
+        field: 'leftBehindByStop.0.colonies',
+        message: `More than the ${secondStop.colonies} colonies this truck takes here.`,
+      },
     ]);
 
     const [applied] = await crewSync([
