@@ -54,7 +54,11 @@ async function twoStopTruck(moveId: string) {
   const { body: full } = await planner.get(`/api/moves/${moveId}`).expect(200);
   const load = full.loads.find(
     (l: { plan: { stops: unknown[] } }) => l.plan.stops.length === 2,
-  ) as { id: string; version: number; plan: { stops: Array<{ yardId: string; lotId: string }> } };
+  ) as {
+    id: string;
+    version: number;
+    plan: { stops: Array<{ yardId: string; lotId: string; colonies: number }> };
+  };
   expect(load, 'one truck calls at both yards').toBeDefined();
   const [first, second] = load.plan.stops.map(({ yardId, lotId }) => ({ yardId, lotId }));
   const counts = (payload: Record<string, unknown>) => ({
@@ -411,7 +415,7 @@ describe('POST /api/moves/sync', () => {
     const planned = { [w.yardA]: 40, [w.yardB]: 20 };
     const move = await plannedMove('2027-02-16', [planned[w.yardA], planned[w.yardB]]);
     const { load, first, second, counts } = await twoStopTruck(move.id);
-    const secondStop = (load.plan.stops as Array<{ colonies: number }>)[1];
+    const secondStop = load.plan.stops[1];
     const refused = await crewSync([
       counts({ leftBehindByStop: [{ yardId: w.yardA, lotId: w.yardA, colonies: 3 }] }),
       counts({ leftBehindByStop: [{ ...first, colonies: 3 }], coloniesLeftBehind: 5 }),
