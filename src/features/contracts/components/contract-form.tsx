@@ -1,6 +1,4 @@
-import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import {
   contractCreateRequest,
   contractStatuses,
@@ -9,6 +7,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Select, Textarea } from '@/components/ui/input';
 import { ScaledNumberInput } from '@/components/ui/scaled-number-input';
 import { applyServerErrors, asNullableDate, asNumber, schemaResolver } from '@/lib/forms';
@@ -97,9 +96,7 @@ export function ContractForm({
 }: ContractFormProps) {
   const create = useCreateContract();
   const update = useUpdateContract();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
-  const [reloading, setReloading] = useState(false);
+  const saveFailure = useFormFailure(onReload);
   const {
     register,
     control,
@@ -114,30 +111,16 @@ export function ContractForm({
   const growerSites = sites.filter((s) => !s.growerId || s.growerId === chosenGrower);
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       const saved = contract
         ? await update.mutateAsync({ id: contract.id, version: contract.version, changes: values })
         : await create.mutateAsync(values);
       onSaved(saved);
     } catch (error) {
-      setUnplaced(applyServerErrors(error, setError, fieldNames));
-      setFailure(error);
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
-
-  const reload = onReload
-    ? async () => {
-        setReloading(true);
-        try {
-          await onReload();
-          setFailure(null);
-        } finally {
-          setReloading(false);
-        }
-      }
-    : undefined;
 
   return (
     <form
@@ -146,7 +129,12 @@ export function ContractForm({
       aria-label={contract ? 'Edit contract' : 'Add a contract'}
       className="flex max-w-3xl flex-col gap-5"
     >
-      <FormAlert error={failure} unplaced={unplaced} onReload={reload} reloading={reloading} />
+      <FormAlert
+        error={saveFailure.failure}
+        unplaced={saveFailure.unplaced}
+        onReload={saveFailure.reload}
+        reloading={saveFailure.reloading}
+      />
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 text-lg font-semibold text-dusk-50">Who and what</legend>
         <Field label="Grower" error={errors.growerId?.message}>

@@ -1,10 +1,9 @@
-import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import { growerCreateRequest, type GrowerCreateRequest } from '@shared/schemas/growers';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Textarea } from '@/components/ui/input';
 import { applyServerErrors, schemaResolver } from '@/lib/forms';
 import { useCreateGrower } from '../api/create-grower';
@@ -40,9 +39,7 @@ interface GrowerFormProps {
 export function GrowerForm({ grower, onSaved, onCancel, onReload }: GrowerFormProps) {
   const create = useCreateGrower();
   const update = useUpdateGrower();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
-  const [reloading, setReloading] = useState(false);
+  const saveFailure = useFormFailure(onReload);
   const {
     register,
     control,
@@ -56,30 +53,16 @@ export function GrowerForm({ grower, onSaved, onCancel, onReload }: GrowerFormPr
   const contacts = useFieldArray({ control, name: 'contacts' });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       const saved = grower
         ? await update.mutateAsync({ id: grower.id, version: grower.version, changes: values })
         : await create.mutateAsync(values);
       onSaved(saved);
     } catch (error) {
-      setUnplaced(applyServerErrors(error, setError, fieldNames));
-      setFailure(error);
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
-
-  const reload = onReload
-    ? async () => {
-        setReloading(true);
-        try {
-          await onReload();
-          setFailure(null);
-        } finally {
-          setReloading(false);
-        }
-      }
-    : undefined;
 
   return (
     <form
@@ -88,7 +71,12 @@ export function GrowerForm({ grower, onSaved, onCancel, onReload }: GrowerFormPr
       aria-label={grower ? `Edit ${grower.name}` : 'Add a grower'}
       className="flex max-w-3xl flex-col gap-5"
     >
-      <FormAlert error={failure} unplaced={unplaced} onReload={reload} reloading={reloading} />
+      <FormAlert
+        error={saveFailure.failure}
+        unplaced={saveFailure.unplaced}
+        onReload={saveFailure.reload}
+        reloading={saveFailure.reloading}
+      />
       <Field label="Grower or farm name" error={errors.name?.message}>
         <Input {...register('name')} />
       </Field>

@@ -1,6 +1,4 @@
-import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import {
   ledgerEntryCreateRequest,
   type LedgerEntryCreateRequest,
@@ -9,6 +7,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Select, Textarea } from '@/components/ui/input';
 import { applyServerErrors, asNumber, schemaResolver } from '@/lib/forms';
 import { formatCount, todayIso } from '@/lib/units';
@@ -84,8 +83,7 @@ export function LedgerEntryForm({
   onCancel,
 }: LedgerEntryFormProps) {
   const create = useCreateLedgerEntry();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
+  const saveFailure = useFormFailure();
   const {
     register,
     handleSubmit,
@@ -102,8 +100,7 @@ export function LedgerEntryForm({
   });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       await create.mutateAsync(toLedgerRequest(values, place));
       const verb =
@@ -117,8 +114,7 @@ export function LedgerEntryForm({
         'occurredOn',
         'reason',
       ]);
-      setUnplaced(issues);
-      setFailure(error);
+      saveFailure.fail(error, issues);
     }
   });
 
@@ -129,7 +125,7 @@ export function LedgerEntryForm({
       aria-label="Record a ledger entry"
       className="flex flex-col gap-4"
     >
-      <FormAlert error={failure} unplaced={unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="What happened" error={errors.kind?.message}>
         <Select {...register('kind')}>
           {kindOptions.map((option) => (

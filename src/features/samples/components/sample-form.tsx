@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import {
   useForm,
   type FieldError,
@@ -7,10 +6,10 @@ import {
   type UseFormSetError,
 } from 'react-hook-form';
 import type { z } from 'zod';
-import type { FieldIssue } from '@shared/api/errors';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Select, Textarea } from '@/components/ui/input';
 import { applyServerErrors, schemaResolver } from '@/lib/forms';
 import { formatCount, todayIso } from '@/lib/units';
@@ -90,8 +89,7 @@ export function SampleForm<Request>({
   onRecorded,
   onCancel,
 }: SampleFormProps<Request>) {
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
+  const saveFailure = useFormFailure();
 
   const requestResolver = schemaResolver(schema as never) as unknown as Resolver<FieldValues>;
   const resolver: Resolver<SampleFormValues> = async (values, context, options) => {
@@ -135,8 +133,7 @@ export function SampleForm<Request>({
   });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     const readings = parseReadings(values.readings);
     try {
       await save(toRequest(values, readings.values));
@@ -151,7 +148,7 @@ export function SampleForm<Request>({
           setError(field as keyof SampleFormValues, fieldError, options);
         }
       };
-      setUnplaced(applyServerErrors(error, place, [...sharedFields, readingsField]));
+      const unplaced = applyServerErrors(error, place, [...sharedFields, readingsField]);
       if (readingIssues.length > 0) {
         setError(
           'readings',
@@ -166,7 +163,7 @@ export function SampleForm<Request>({
           { shouldFocus: true },
         );
       }
-      setFailure(error);
+      saveFailure.fail(error, unplaced);
     }
   });
 
@@ -178,7 +175,7 @@ export function SampleForm<Request>({
 
   return (
     <form onSubmit={submit} noValidate aria-label={formLabel} className="flex flex-col gap-4">
-      <FormAlert error={failure} unplaced={unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Colony lot" error={errors.lotId?.message}>
           <Select {...register('lotId')}>

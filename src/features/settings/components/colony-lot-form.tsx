@@ -13,7 +13,7 @@ import { applyServerErrors, asNumber, schemaResolver } from '@/lib/forms';
 import { useCreateColonyLot } from '../api/create-colony-lot';
 import { useUpdateColonyLot } from '../api/update-colony-lot';
 import type { ColonyLot, HiveSetup } from '../types';
-import { useFormFailure } from './use-form-failure';
+import { useFormFailure } from '@/hooks/use-form-failure';
 
 export const queenStatusLabels: Record<(typeof queenStatuses)[number], string> = {
   'queen-right': 'Queen-right',
@@ -35,7 +35,7 @@ interface ColonyLotFormProps {
 export function ColonyLotForm({ lot, setups, onSaved, onCancel }: ColonyLotFormProps) {
   const create = useCreateColonyLot();
   const update = useUpdateColonyLot();
-  const result = useFormFailure();
+  const saveFailure = useFormFailure();
   const {
     register,
     handleSubmit,
@@ -60,7 +60,7 @@ export function ColonyLotForm({ lot, setups, onSaved, onCancel }: ColonyLotFormP
         },
   });
   const submit = handleSubmit(async (values) => {
-    result.clear();
+    saveFailure.clear();
     try {
       onSaved(
         lot
@@ -68,7 +68,7 @@ export function ColonyLotForm({ lot, setups, onSaved, onCancel }: ColonyLotFormP
           : await create.mutateAsync(values),
       );
     } catch (error) {
-      result.fail(
+      saveFailure.fail(
         error,
         applyServerErrors(error, setError, [
           'name',
@@ -88,7 +88,7 @@ export function ColonyLotForm({ lot, setups, onSaved, onCancel }: ColonyLotFormP
       aria-label={lot ? `Edit ${lot.name}` : 'Add a colony lot'}
       className="flex flex-col gap-4"
     >
-      <FormAlert error={result.failure} unplaced={result.unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="Lot name" error={errors.name?.message}>
         <Input {...register('name')} />
       </Field>

@@ -16,7 +16,7 @@ import { formatWeight } from '@/lib/units';
 import { useCreateHiveSetup } from '../api/create-hive-setup';
 import { useUpdateHiveSetup } from '../api/update-hive-setup';
 import type { HiveSetup } from '../types';
-import { useFormFailure } from './use-form-failure';
+import { useFormFailure } from '@/hooks/use-form-failure';
 
 const sizeLabels = { deep: 'Deep', medium: 'Medium', shallow: 'Shallow' } as const;
 const toPercent = (fill: number) => fill * 100;
@@ -44,7 +44,7 @@ interface HiveSetupFormProps {
 export function HiveSetupForm({ setup, units, onSaved, onCancel }: HiveSetupFormProps) {
   const create = useCreateHiveSetup();
   const update = useUpdateHiveSetup();
-  const result = useFormFailure();
+  const saveFailure = useFormFailure();
   const {
     register,
     control,
@@ -62,7 +62,7 @@ export function HiveSetupForm({ setup, units, onSaved, onCancel }: HiveSetupForm
   const weightKg = estimatedWeightKg(watched);
 
   const submit = handleSubmit(async (values) => {
-    result.clear();
+    saveFailure.clear();
     try {
       onSaved(
         setup
@@ -70,7 +70,7 @@ export function HiveSetupForm({ setup, units, onSaved, onCancel }: HiveSetupForm
           : await create.mutateAsync(values),
       );
     } catch (error) {
-      result.fail(error, applyServerErrors(error, setError, ['name', 'boxes']));
+      saveFailure.fail(error, applyServerErrors(error, setError, ['name', 'boxes']));
     }
   });
 
@@ -81,7 +81,7 @@ export function HiveSetupForm({ setup, units, onSaved, onCancel }: HiveSetupForm
       aria-label={setup ? `Edit ${setup.name}` : 'Add a hive setup'}
       className="flex flex-col gap-4"
     >
-      <FormAlert error={result.failure} unplaced={result.unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="Setup name" hint="For example: Two deeps" error={errors.name?.message}>
         <Input {...register('name')} />
       </Field>

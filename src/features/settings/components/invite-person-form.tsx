@@ -8,7 +8,7 @@ import { Input, Select } from '@/components/ui/input';
 import { applyServerErrors, schemaResolver } from '@/lib/forms';
 import { useCreatePerson } from '../api/create-person';
 import type { Person } from '../types';
-import { useFormFailure } from './use-form-failure';
+import { useFormFailure } from '@/hooks/use-form-failure';
 
 export const roleLabels = {
   owner: 'Owner',
@@ -36,7 +36,7 @@ export function InvitePersonForm({
   onCancel: () => void;
 }) {
   const create = useCreatePerson();
-  const result = useFormFailure();
+  const saveFailure = useFormFailure();
   const {
     register,
     control,
@@ -49,7 +49,7 @@ export function InvitePersonForm({
   });
   const role = useWatch({ control, name: 'role' });
   const submit = handleSubmit(async (values) => {
-    result.clear();
+    saveFailure.clear();
     try {
       onSaved(
         await create.mutateAsync({
@@ -58,7 +58,7 @@ export function InvitePersonForm({
         }),
       );
     } catch (error) {
-      result.fail(
+      saveFailure.fail(
         error,
         applyServerErrors(error, setError, ['name', 'email', 'role', 'growerId', 'password']),
       );
@@ -66,7 +66,7 @@ export function InvitePersonForm({
   });
   return (
     <form onSubmit={submit} noValidate aria-label="Invite a person" className="flex flex-col gap-4">
-      <FormAlert error={result.failure} unplaced={result.unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="Name" error={errors.name?.message}>
         <Input autoComplete="off" {...register('name')} />
       </Field>

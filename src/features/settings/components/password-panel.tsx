@@ -8,7 +8,7 @@ import { Section } from '@/components/ui/page-header';
 import { useToast } from '@/components/ui/toast';
 import { applyServerErrors, schemaResolver } from '@/lib/forms';
 import { useChangePassword } from '../api/change-password';
-import { useFormFailure } from './use-form-failure';
+import { useFormFailure } from '@/hooks/use-form-failure';
 
 interface PasswordValues {
   currentPassword: string;
@@ -19,7 +19,7 @@ interface PasswordValues {
 export function PasswordPanel() {
   const change = useChangePassword();
   const toast = useToast();
-  const result = useFormFailure();
+  const saveFailure = useFormFailure();
   const {
     register,
     handleSubmit,
@@ -31,13 +31,16 @@ export function PasswordPanel() {
     defaultValues: { currentPassword: '', newPassword: '' },
   });
   const submit = handleSubmit(async (values) => {
-    result.clear();
+    saveFailure.clear();
     try {
       await change.mutateAsync(values);
       reset();
       toast.show('Password changed. Other devices are signed out.');
     } catch (error) {
-      result.fail(error, applyServerErrors(error, setError, ['currentPassword', 'newPassword']));
+      saveFailure.fail(
+        error,
+        applyServerErrors(error, setError, ['currentPassword', 'newPassword']),
+      );
     }
   });
   return (
@@ -48,7 +51,7 @@ export function PasswordPanel() {
         aria-label="Change password"
         className="flex max-w-md flex-col gap-4"
       >
-        <FormAlert error={result.failure} unplaced={result.unplaced} />
+        <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
         <Field label="Current password" error={errors.currentPassword?.message}>
           <Input type="password" autoComplete="current-password" {...register('currentPassword')} />
         </Field>

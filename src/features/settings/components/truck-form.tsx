@@ -12,7 +12,7 @@ import { weightFromKg, weightToKg, weightUnit } from '@/lib/units';
 import { useCreateTruck } from '../api/create-truck';
 import { useUpdateTruck } from '../api/update-truck';
 import type { Truck } from '../types';
-import { useFormFailure } from './use-form-failure';
+import { useFormFailure } from '@/hooks/use-form-failure';
 
 type TruckFormValues = z.input<typeof truckCreateRequest>;
 const fieldNames = ['name', 'payloadKg', 'palletSpots', 'tiers', 'tareKg', 'legalGrossKg', 'notes'];
@@ -28,7 +28,7 @@ interface TruckFormProps {
 export function TruckForm({ truck, units, onSaved, onCancel }: TruckFormProps) {
   const create = useCreateTruck();
   const update = useUpdateTruck();
-  const result = useFormFailure();
+  const saveFailure = useFormFailure();
   const {
     register,
     control,
@@ -54,7 +54,7 @@ export function TruckForm({ truck, units, onSaved, onCancel }: TruckFormProps) {
   const toKg = (shown: number) => weightToKg(shown, units);
 
   const submit = handleSubmit(async (values) => {
-    result.clear();
+    saveFailure.clear();
     try {
       onSaved(
         truck
@@ -62,7 +62,7 @@ export function TruckForm({ truck, units, onSaved, onCancel }: TruckFormProps) {
           : await create.mutateAsync(values),
       );
     } catch (error) {
-      result.fail(error, applyServerErrors(error, setError, fieldNames));
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
 
@@ -91,7 +91,7 @@ export function TruckForm({ truck, units, onSaved, onCancel }: TruckFormProps) {
       aria-label={truck ? `Edit ${truck.name}` : 'Add a truck'}
       className="flex flex-col gap-4"
     >
-      <FormAlert error={result.failure} unplaced={result.unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="Truck name" error={errors.name?.message}>
         <Input {...register('name')} />
       </Field>

@@ -1,11 +1,10 @@
-import { useState } from 'react';
 import type { z } from 'zod';
 import { Controller, useForm } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import { siteCreateRequest, siteKinds, type SiteCreateRequest } from '@shared/schemas/sites';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Select, Textarea } from '@/components/ui/input';
 import { cropOptions } from '@/lib/crops';
 import { applyServerErrors, asNullableDate, asNumber, schemaResolver } from '@/lib/forms';
@@ -58,9 +57,7 @@ interface SiteFormProps {
 export function SiteForm({ site, growers, onSaved, onCancel, onReload }: SiteFormProps) {
   const create = useCreateSite();
   const update = useUpdateSite();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
-  const [reloading, setReloading] = useState(false);
+  const saveFailure = useFormFailure(onReload);
   const {
     register,
     control,
@@ -73,30 +70,16 @@ export function SiteForm({ site, growers, onSaved, onCancel, onReload }: SiteFor
   });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       const saved = site
         ? await update.mutateAsync({ id: site.id, version: site.version, changes: values })
         : await create.mutateAsync(values);
       onSaved(saved);
     } catch (error) {
-      setUnplaced(applyServerErrors(error, setError, fieldNames));
-      setFailure(error);
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
-
-  const reload = onReload
-    ? async () => {
-        setReloading(true);
-        try {
-          await onReload();
-          setFailure(null);
-        } finally {
-          setReloading(false);
-        }
-      }
-    : undefined;
 
   return (
     <form
@@ -105,7 +88,12 @@ export function SiteForm({ site, growers, onSaved, onCancel, onReload }: SiteFor
       aria-label={site ? `Edit ${site.name}` : 'Add a site'}
       className="flex max-w-3xl flex-col gap-5"
     >
-      <FormAlert error={failure} unplaced={unplaced} onReload={reload} reloading={reloading} />
+      <FormAlert
+        error={saveFailure.failure}
+        unplaced={saveFailure.unplaced}
+        onReload={saveFailure.reload}
+        reloading={saveFailure.reloading}
+      />
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Site name" error={errors.name?.message}>
           <Input {...register('name')} />

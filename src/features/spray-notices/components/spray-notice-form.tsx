@@ -1,6 +1,4 @@
-import { useState } from 'react';
 import { useForm, type FieldValues, type Resolver } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import {
   sprayNoticeCreateRequest,
   type SprayNoticeCreateRequest,
@@ -8,6 +6,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Select, Textarea } from '@/components/ui/input';
 import { applyServerErrors, schemaResolver } from '@/lib/forms';
 import { useCreateSprayNotice } from '../api/create-spray-notice';
@@ -68,8 +67,7 @@ interface SprayNoticeFormProps {
 /** Files a planned pesticide application so the beekeeper can plan around it. */
 export function SprayNoticeForm({ sites, onFiled }: SprayNoticeFormProps) {
   const create = useCreateSprayNotice();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
+  const saveFailure = useFormFailure();
   const {
     register,
     handleSubmit,
@@ -88,15 +86,13 @@ export function SprayNoticeForm({ sites, onFiled }: SprayNoticeFormProps) {
   });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       const notice = await create.mutateAsync(toSprayNoticeRequest(values));
       reset({ ...values, startsAt: '', endsAt: '', product: '', notes: '' });
       onFiled?.(notice);
     } catch (error) {
-      setUnplaced(applyServerErrors(error, setError, fieldNames));
-      setFailure(error);
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
 
@@ -108,7 +104,7 @@ export function SprayNoticeForm({ sites, onFiled }: SprayNoticeFormProps) {
       className="flex flex-col gap-4"
     >
       <SprayCaution />
-      <FormAlert error={failure} unplaced={unplaced} />
+      <FormAlert error={saveFailure.failure} unplaced={saveFailure.unplaced} />
       <Field label="Site" error={errors.siteId?.message}>
         <Select {...register('siteId')}>
           <option value="">Choose a site…</option>

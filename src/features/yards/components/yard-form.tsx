@@ -1,10 +1,9 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import type { FieldIssue } from '@shared/api/errors';
 import { yardCreateRequest, type YardCreateRequest, type YardView } from '@shared/schemas/yards';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { FormAlert } from '@/components/ui/form-alert';
+import { useFormFailure } from '@/hooks/use-form-failure';
 import { Input, Textarea } from '@/components/ui/input';
 import { applyServerErrors, asNullableDate, asNumber, schemaResolver } from '@/lib/forms';
 import { useCreateYard } from '../api/create-yard';
@@ -47,9 +46,7 @@ interface YardFormProps {
 export function YardForm({ yard, onSaved, onCancel, onReload }: YardFormProps) {
   const create = useCreateYard();
   const update = useUpdateYard();
-  const [failure, setFailure] = useState<unknown>(null);
-  const [unplaced, setUnplaced] = useState<FieldIssue[]>([]);
-  const [reloading, setReloading] = useState(false);
+  const saveFailure = useFormFailure(onReload);
   const {
     register,
     handleSubmit,
@@ -61,30 +58,16 @@ export function YardForm({ yard, onSaved, onCancel, onReload }: YardFormProps) {
   });
 
   const submit = handleSubmit(async (values) => {
-    setFailure(null);
-    setUnplaced([]);
+    saveFailure.clear();
     try {
       const saved = yard
         ? await update.mutateAsync({ id: yard.id, version: yard.version, changes: values })
         : await create.mutateAsync(values);
       onSaved(saved);
     } catch (error) {
-      setUnplaced(applyServerErrors(error, setError, fieldNames));
-      setFailure(error);
+      saveFailure.fail(error, applyServerErrors(error, setError, fieldNames));
     }
   });
-
-  const reload = onReload
-    ? async () => {
-        setReloading(true);
-        try {
-          await onReload();
-          setFailure(null);
-        } finally {
-          setReloading(false);
-        }
-      }
-    : undefined;
 
   return (
     <form
@@ -93,7 +76,12 @@ export function YardForm({ yard, onSaved, onCancel, onReload }: YardFormProps) {
       aria-label={yard ? `Edit ${yard.name}` : 'Add a yard'}
       className="flex max-w-2xl flex-col gap-4"
     >
-      <FormAlert error={failure} unplaced={unplaced} onReload={reload} reloading={reloading} />
+      <FormAlert
+        error={saveFailure.failure}
+        unplaced={saveFailure.unplaced}
+        onReload={saveFailure.reload}
+        reloading={saveFailure.reloading}
+      />
       <Field label="Yard name" error={errors.name?.message}>
         <Input autoComplete="off" {...register('name')} />
       </Field>
