@@ -30,7 +30,7 @@ export function zoneAbbreviation(iso: string, timeZone: string): string | null {
  * "Tue 8:34 PM CST (UTC−6)": the wall clock written in the instant itself, its zone's short name
  * when the zone is known, and its offset always.
  */
-export function formatLocalTime(iso: string | null | undefined, timeZone?: string) {
+export function formatLocalTime(iso: string | null | undefined, timeZone?: string | null) {
   if (!iso) return '—';
   const match = ISO_LOCAL.exec(iso);
   if (!match) return iso;

@@ -62,4 +62,13 @@ describe('Crew records by truck and yard', () => {
     expect(within(row('Salt Lick')).getAllByRole('cell')[2].textContent).toBe('5');
     expect(table.textContent).toContain('64 · 4 · 0');
   });
+  it('when a truck has no saved load yet then its row shows nothing recorded instead of failing', () => {
+    render(<CrewRecordsTable pages={[{ ...page, loadId: null, recorded: null }]} />);
+    const truck = screen
+      .getByRole('table', { name: 'Crew records' })
+      .querySelector('[data-crew-truck="Rig Amber"]') as HTMLElement;
+    expect(within(truck).getByTestId('truck-loaded').textContent).toBe('—');
+    expect(truck.textContent).toContain('Not kept');
+    expect(truck.textContent).toContain('— · — · —');
+  });
 });

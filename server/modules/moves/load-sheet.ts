@@ -1,7 +1,34 @@
 import type { DataSource } from 'typeorm';
 import type { Actor } from '../../middleware/authorise';
-import { planOfMove } from './move-planning';
+import type { LoadSheet } from '../../../shared/schemas/load-sheet';
+import { MoveLoad } from './move-load.entity';
+import { planOfMove, recordOf } from './move-planning';
 import { moves } from './moves.service';
+
+/** A destination site (with its grower and drop count) or yard, as read for the sheet. */
+interface DestinationRow {
+  id: string;
+  name: string;
+  latitude: number | null;
+  longitude: number | null;
+  access_notes: string;
+  crop?: string | null;
+  grower_id?: string | null;
+  grower_name?: string | null;
+  /** A count; PostgreSQL's integer from jsonb_array_length. */
+  drops?: number | string;
+}
+
+interface ContractRow {
+  id: string;
+  crop: string;
+  status: string;
+  colonies_ordered: number;
+  min_frames: number;
+  average_frames: number | null;
+  delivery_start_on: string;
+  delivery_end_on: string;
+}
 
 /**
  * The printable load sheet: one page per truck with its pick-ups in order (yard names and access
@@ -9,18 +36,20 @@ import { moves } from './moves.service';
  * grower's contacts and drop reference, and the cautions. Staff only (growers never get yard
  * access notes); there is no money on it, so crew get all of it.
  */
-export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) {
+export async function loadSheetOf(
+  db: DataSource,
+  actor: Actor,
+  moveId: string,
+): Promise<LoadSheet> {
   const move = await moves.get(db, actor.operationId, moveId);
   const plan = await planOfMove(db, actor.operationId, move);
   const yardIds = [...new Set(plan.loadSheet.origins.map((o) => o.yardId))];
 
   const [loads, yards, destinations, contract] = await Promise.all([
-    db.query(
-      `SELECT id, truck_id, driver_names, pallets_loaded, pallets_by_stop, colonies_placed, colonies_left_behind,
-              left_behind_by_stop, colonies_lost, placements, pre_roll_check, notes, version
-         FROM move_loads WHERE operation_id = $1 AND move_id = $2 ORDER BY position, id`,
-      [actor.operationId, move.id],
-    ) as Promise<Array<Record<string, unknown> & { id: string }>>,
+    db.getRepository(MoveLoad).find({
+      where: { operationId: actor.operationId, moveId: move.id },
+      order: { position: 'ASC', id: 'ASC' },
+    }),
     db.query(
       `SELECT id, name, latitude, longitude, access_notes FROM yards WHERE operation_id = $1 AND id = ANY($2::uuid[])`,
       [actor.operationId, yardIds],
@@ -34,11 +63,11 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
              FROM sites s LEFT JOIN growers g ON g.id = s.grower_id
             WHERE s.operation_id = $1 AND s.id = ANY($2::uuid[])`,
           [actor.operationId, move.destinationIds],
-        ) as Promise<Array<Record<string, unknown> & { id: string; grower_id: string | null }>>)
+        ) as Promise<DestinationRow[]>)
       : (db.query(
           `SELECT id, name, latitude, longitude, access_notes FROM yards WHERE operation_id = $1 AND id = ANY($2::uuid[])`,
           [actor.operationId, move.destinationIds],
-        ) as Promise<Array<Record<string, unknown> & { id: string; grower_id?: null }>>),
+        ) as Promise<DestinationRow[]>),
     move.contractId
       ? (db.query(
           `SELECT id, crop, status, colonies_ordered, min_frames, average_frames,
@@ -46,8 +75,8 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
                   to_char(delivery_end_on, 'YYYY-MM-DD') AS delivery_end_on
              FROM contracts WHERE operation_id = $1 AND id = $2`,
           [actor.operationId, move.contractId],
-        ) as Promise<Array<Record<string, unknown>>>)
-      : Promise.resolve([]),
+        ) as Promise<ContractRow[]>)
+      : Promise.resolve([] as ContractRow[]),
   ]);
   const growerIds = [...new Set(destinations.map((d) => d.grower_id).filter(Boolean))];
   const contacts = (await db.query(
@@ -101,7 +130,7 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
         grower: d.grower_id
           ? {
               id: d.grower_id,
-              name: d.grower_name,
+              name: d.grower_name ?? '',
               contacts: contacts
                 .filter((x) => x.grower_id === d.grower_id)
                 .map((x) => ({ name: x.name, phone: x.phone, title: x.title })),
@@ -129,20 +158,7 @@ export async function loadSheetOf(db: DataSource, actor: Actor, moveId: string) 
             civilDusk: dusk?.civilDusk ?? null,
           };
         }),
-        recorded: load
-          ? {
-              palletsLoaded: load.pallets_loaded,
-              palletsByStop: load.pallets_by_stop,
-              coloniesPlaced: load.colonies_placed,
-              coloniesLeftBehind: load.colonies_left_behind,
-              leftBehindByStop: load.left_behind_by_stop,
-              coloniesLost: load.colonies_lost,
-              placements: load.placements,
-              preRollCheck: load.pre_roll_check,
-              notes: load.notes,
-              version: load.version,
-            }
-          : null,
+        recorded: load ? recordOf(load) : null,
       };
     }),
     warnings: plan.warnings,

@@ -1,7 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
-import type { MovePreviewRequest } from '../../../shared/schemas/moves';
+import type { LoadRecord, MovePreviewRequest } from '../../../shared/schemas/moves';
 import { availabilityOn, gatherPlanFacts, type PlanInput } from './move-facts';
 import type { MovePlan, PlannedStop, PlannedTruck } from '../../../shared/schemas/move-plan';
 import { buildMovePlan } from './move-plan';
@@ -16,16 +16,9 @@ export function plannedStopsOf(load: MoveLoad): PlannedStop[] | null {
   return plan?.stops ?? null;
 }
 
-/** A load as every staff role sees it (there is no money on a load). */
-export function presentLoad(l: MoveLoad) {
+/** What the crew recorded on a load, as the API presents it (moves, load sheet, Tonight). */
+export function recordOf(l: MoveLoad): LoadRecord {
   return {
-    id: l.id,
-    truckId: l.truckId,
-    position: l.position,
-    driverNames: l.driverNames,
-    palletsPlanned: l.palletsPlanned,
-    coloniesPlanned: l.coloniesPlanned,
-    plan: l.plan,
     palletsLoaded: l.palletsLoaded,
     palletsByStop: l.palletsByStop,
     coloniesPlaced: l.coloniesPlaced,
@@ -36,6 +29,20 @@ export function presentLoad(l: MoveLoad) {
     preRollCheck: l.preRollCheck,
     notes: l.notes,
     version: l.version,
+  };
+}
+
+/** A load as every staff role sees it (there is no money on a load). */
+export function presentLoad(l: MoveLoad) {
+  return {
+    id: l.id,
+    truckId: l.truckId,
+    position: l.position,
+    driverNames: l.driverNames,
+    palletsPlanned: l.palletsPlanned,
+    coloniesPlanned: l.coloniesPlanned,
+    plan: l.plan,
+    ...recordOf(l),
   };
 }
 

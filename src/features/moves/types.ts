@@ -2,13 +2,7 @@ import type { LoadRecord, MoveStatus } from '@shared/schemas/moves';
 export type { DropPlacement, LoadRecord } from '@shared/schemas/moves';
 
 // The plan's shape is shared with the server that builds it.
-import type {
-  PlanOrigin,
-  PlanTimeline,
-  PlanTotals,
-  PlannedStop,
-  PlannedTruck,
-} from '@shared/schemas/move-plan';
+import type { PlanOrigin, PlanTimeline, PlanTotals, PlannedTruck } from '@shared/schemas/move-plan';
 import type { MoveCaution, MoveWarning } from '@shared/domain/move-warnings';
 export type {
   MovePlan,
@@ -91,68 +85,11 @@ export interface Availability {
   items: AvailabilityItem[];
 }
 
-export interface LoadSheetStop extends PlannedStop {
-  latitude: number;
-  longitude: number;
-  accessNotes: string;
-  timeZone: string;
-  civilDusk: string | null;
-}
-
-export interface LoadSheetPage extends Omit<PlannedTruck, 'stops'> {
-  page: number;
-  loadId: string;
-  stops: LoadSheetStop[];
-  recorded: LoadRecord;
-}
-
-export interface LoadSheetDestination {
-  kind: 'yard' | 'site';
-  id: string;
-  name: string;
-  latitude: number | null;
-  longitude: number | null;
-  accessNotes: string;
-  crop: string | null;
-  dropMap: { siteId: string; drops: number } | null;
-  grower: {
-    id: string;
-    name: string;
-    contacts: Array<{ name: string; phone: string | null; title: string | null }>;
-  } | null;
-}
-
-/** GET /api/moves/:id/load-sheet: printable pages, one per truck. */
-export interface LoadSheet {
-  move: {
-    id: string;
-    name: string;
-    nightOf: string;
-    status: MoveStatus;
-    drivers: 1 | 2;
-    loadingMinutes: number;
-    averageSpeedKmh: number;
-    notes: string;
-    version: number;
-  };
-  planSource: 'saved' | 'computed-now';
-  computedAt: string | null;
-  contract: {
-    id: string;
-    crop: string;
-    status: string;
-    coloniesOrdered: number;
-    minFrames: number;
-    averageFrames: number | null;
-    deliveryStartOn: string;
-    deliveryEndOn: string;
-  } | null;
-  destinations: LoadSheetDestination[];
-  timeline: PlanTimeline;
-  totals: PlanTotals;
-  palletTareKg: number;
-  pages: LoadSheetPage[];
-  warnings: MoveWarning[];
-  cautions: MoveCaution[];
-  assumptions: string[];
-}
+// The load sheet's shape is shared with the server that builds it.
+export type {
+  LoadSheet,
+  LoadSheetContract,
+  LoadSheetDestination,
+  LoadSheetPage,
+  LoadSheetStop,
+} from '@shared/schemas/load-sheet';

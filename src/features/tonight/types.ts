@@ -20,7 +20,7 @@ export interface TonightLoad {
     colonies: number;
     accessNotes: string;
     civilDusk: string | null;
-    timeZone: string;
+    timeZone: string | null;
   }>;
   recorded: LoadRecord;
 }

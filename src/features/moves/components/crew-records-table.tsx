@@ -1,9 +1,23 @@
 import { preRollItems, preRollMissing } from '@shared/domain/pre-roll-check';
 import { formatCount } from '@/lib/units';
-import type { LoadSheetPage } from '../types';
+import type { LoadRecord, LoadSheetPage } from '../types';
 
 const count = (value: number | null | undefined) =>
   value === null || value === undefined ? '—' : formatCount(value);
+
+/** A page whose truck has no saved load yet (a plan computed now): nothing recorded on it. */
+const nothingRecorded: LoadRecord = {
+  palletsLoaded: null,
+  palletsByStop: null,
+  coloniesPlaced: null,
+  coloniesLeftBehind: null,
+  leftBehindByStop: null,
+  coloniesLost: null,
+  placements: null,
+  preRollCheck: null,
+  notes: '',
+  version: 0,
+};
 
 /** What the crew has recorded so far, per truck and pick-up yard, beside what was planned. */
 export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
@@ -21,7 +35,7 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
           </tr>
         </thead>
         {pages.map((page) => {
-          const { recorded } = page;
+          const recorded = page.recorded ?? nothingRecorded;
           const byStop = recorded.palletsByStop;
           const missing = preRollMissing(recorded.preRollCheck);
           return (

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ListResult } from '@shared/schemas/common';
+import type { LoadSheet } from '@shared/schemas/load-sheet';
 import type { MoveStatus } from '@shared/schemas/moves';
 import { api, ApiError } from '@/lib/api-client';
 import { addDays } from '../lib/dates';
@@ -15,14 +16,6 @@ interface MoveSummary {
   nightOf: string;
   status: MoveStatus;
   version: number;
-}
-
-interface SheetAnswer {
-  destinations: Array<{ id: string; name: string; accessNotes: string }>;
-  cautions: Array<{ code: string; message: string }>;
-  pages: Array<
-    TonightMove['loads'][number] & { recorded: TonightMove['loads'][number]['recorded'] }
-  >;
 }
 
 /** Today's and tomorrow's moves (or, with none, the next night's) with their load sheets. */
@@ -44,7 +37,7 @@ export async function getTonight(today: string): Promise<TonightSnapshot> {
   if (upcoming) chosen = active.filter((m) => m.nightOf === active[0].nightOf && m.nightOf > today);
   const moves = await Promise.all(
     chosen.map(async (m): Promise<TonightMove> => {
-      const sheet = await api.get<SheetAnswer>(`/api/moves/${encodeURIComponent(m.id)}/load-sheet`);
+      const sheet = await api.get<LoadSheet>(`/api/moves/${encodeURIComponent(m.id)}/load-sheet`);
       return {
         id: m.id,
         name: m.name,
@@ -57,18 +50,25 @@ export async function getTonight(today: string): Promise<TonightSnapshot> {
           accessNotes: d.accessNotes,
         })),
         cautions: sheet.cautions,
-        loads: sheet.pages.map((p) => ({
-          loadId: p.loadId,
-          key: p.key,
-          truckName: p.truckName,
-          driverNames: p.driverNames,
-          pallets: p.pallets,
-          colonies: p.colonies,
-          departure: p.departure,
-          arrival: p.arrival,
-          stops: p.stops,
-          recorded: p.recorded,
-        })),
+        // Only trucks with a saved load can be recorded on (a plan computed now has none).
+        loads: sheet.pages.flatMap((p) =>
+          p.loadId && p.recorded
+            ? [
+                {
+                  loadId: p.loadId,
+                  key: p.key,
+                  truckName: p.truckName,
+                  driverNames: p.driverNames,
+                  pallets: p.pallets,
+                  colonies: p.colonies,
+                  departure: p.departure,
+                  arrival: p.arrival,
+                  stops: p.stops,
+                  recorded: p.recorded,
+                },
+              ]
+            : [],
+        ),
       };
     }),
   );
