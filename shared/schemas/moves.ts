@@ -153,6 +153,20 @@ export interface LoadRecord {
   notes: string;
   version: number;
 }
+
+/** A load with nothing recorded on it yet. */
+export const nothingRecorded: LoadRecord = {
+  palletsLoaded: null,
+  palletsByStop: null,
+  coloniesPlaced: null,
+  coloniesLeftBehind: null,
+  leftBehindByStop: null,
+  coloniesLost: null,
+  placements: null,
+  preRollCheck: null,
+  notes: '',
+  version: 0,
+};
 export type LoadRecordRequest = z.infer<typeof loadRecordRequest>;
 
 /** Hive weights read off a scale while loading a move. */

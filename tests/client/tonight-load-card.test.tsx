@@ -6,6 +6,7 @@ import { OfflineQueue, type SendChanges } from '@/features/tonight/lib/offline-q
 import { memoryStorage } from '@/features/tonight/lib/storage';
 import type { NewChange } from '@/features/tonight/lib/offline-queue';
 import type { LoadRecord, TonightLoad, TonightMove } from '@/features/tonight/types';
+import { nothingRecorded } from '@shared/schemas/moves';
 import { renderWithProviders } from './support';
 
 const yardA = '33333333-3333-4333-8333-333333333333';
@@ -36,19 +37,7 @@ function card(recorded: Partial<LoadRecord> = {}) {
     departure: null,
     arrival: null,
     stops: [stop(yardA, 'Dry Fork', lotA, 12), stop(yardB, 'Salt Lick', lotB, 6)],
-    recorded: {
-      palletsLoaded: null,
-      palletsByStop: null,
-      coloniesPlaced: null,
-      coloniesLeftBehind: null,
-      leftBehindByStop: null,
-      coloniesLost: null,
-      placements: null,
-      preRollCheck: null,
-      notes: '',
-      version: 3,
-      ...recorded,
-    },
+    recorded: { ...nothingRecorded, version: 3, ...recorded },
   };
   const move: TonightMove = {
     id: '11111111-1111-4111-8111-111111111111',

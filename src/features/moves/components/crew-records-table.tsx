@@ -1,23 +1,10 @@
 import { preRollItems, preRollMissing } from '@shared/domain/pre-roll-check';
 import { formatCount } from '@/lib/units';
-import type { LoadRecord, LoadSheetPage } from '../types';
+import { nothingRecorded } from '@shared/schemas/moves';
+import type { LoadSheetPage } from '../types';
 
 const count = (value: number | null | undefined) =>
   value === null || value === undefined ? '—' : formatCount(value);
-
-/** A page whose truck has no saved load yet (a plan computed now): nothing recorded on it. */
-const nothingRecorded: LoadRecord = {
-  palletsLoaded: null,
-  palletsByStop: null,
-  coloniesPlaced: null,
-  coloniesLeftBehind: null,
-  leftBehindByStop: null,
-  coloniesLost: null,
-  placements: null,
-  preRollCheck: null,
-  notes: '',
-  version: 0,
-};
 
 /** What the crew has recorded so far, per truck and pick-up yard, beside what was planned. */
 export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
@@ -35,6 +22,7 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
           </tr>
         </thead>
         {pages.map((page) => {
+          // A truck without a saved load yet (a plan computed now) has nothing recorded.
           const recorded = page.recorded ?? nothingRecorded;
           const byStop = recorded.palletsByStop;
           const missing = preRollMissing(recorded.preRollCheck);
