@@ -108,9 +108,11 @@ describe('Tonight load card', () => {
     expect(screen.getByText(/2 were recorded as left behind for the whole truck/)).toBeTruthy();
     await userEvent.click(screen.getByText('Placed, left behind, lost'));
     await userEvent.click(screen.getByRole('button', { name: 'Keep placed counts' }));
-    // Nothing given per yard: the truck's total stands (neither field is sent).
-    const { payload } = onChange.mock.calls[0][0];
-    expect(Object.keys(payload).sort()).toEqual(['coloniesLost', 'coloniesPlaced', 'placements']);
+    // Nothing given per yard: the truck's total stands (neither field is sent); nothing typed at
+    // a drop: the placed counts are not sent as zero either.
+    const change = onChange.mock.calls[0][0];
+    expect(Object.keys(change.payload)).toEqual(['coloniesLost']);
+    expect(change.label).toBe('Rig Amber: left behind and lost');
   });
 
   it('when the crew keeps the pre-roll check then the ticked items and the time go with it', async () => {

@@ -129,6 +129,23 @@ describe('moves in the browser', () => {
     await semi3.getByText(/· done \d/).waitFor({ timeout: 15_000 });
     await page.getByText('Everything is sent').waitFor();
 
+    // Two colonies too weak to go stay at Tecolote Draw, kept per yard while there is signal.
+    await semi3.locator('summary', { hasText: 'Placed, left behind, lost' }).click();
+    await semi3.getByLabel('Left behind at Tecolote Draw').fill('2');
+    await semi3.getByRole('button', { name: 'Keep placed counts' }).click();
+    await expect
+      .poll(async () =>
+        (
+          await e2e.db.query(
+            `SELECT l.left_behind_by_stop AS left FROM move_loads l JOIN trucks t ON t.id = l.truck_id
+                WHERE l.move_id = $1 AND t.name = 'Semi 3 Nighthawk'`,
+            [moveId],
+          )
+        )[0].left?.map((c: { colonies: number }) => c.colonies),
+      )
+      .toContain(2);
+    await page.getByText('Everything is sent').waitFor();
+
     await page.context().setOffline(true);
     const more = page.getByRole('button', {
       name: 'Pallets loaded at Tecolote Draw on Semi 3 Nighthawk: one more',
@@ -156,7 +173,8 @@ describe('moves in the browser', () => {
     const [saved] = await e2e.db.query(
       `SELECT m.status, l.pallets_loaded, y.name AS first_yard,
               (l.pallets_by_stop -> 0 ->> 'pallets')::int AS first_yard_pallets,
-              (l.pre_roll_check ->> 'certificateInCab')::boolean AS certificate
+              (l.pre_roll_check ->> 'certificateInCab')::boolean AS certificate,
+              l.colonies_left_behind AS left_behind
          FROM moves m JOIN move_loads l ON l.move_id = m.id
          JOIN trucks t ON t.id = l.truck_id
          JOIN yards y ON y.id = (l.pallets_by_stop -> 0 ->> 'yardId')::uuid
@@ -169,6 +187,7 @@ describe('moves in the browser', () => {
       first_yard: 'Tecolote Draw',
       first_yard_pallets: 3,
       certificate: true,
+      left_behind: 2,
     });
     await screenshot(page, 'tonight-synced');
     await page.close();
@@ -184,6 +203,7 @@ describe('moves in the browser', () => {
     expect(await truck.innerText()).toContain('All ticked');
     const tecolote = truck.locator('[data-crew-stop="Tecolote Draw"] td');
     expect(await tecolote.nth(2).innerText()).toBe('3');
+    expect(await tecolote.nth(4).innerText()).toBe('2 left in this yard');
     await screenshot(office, 'move-crew-records');
     await office.close();
   });

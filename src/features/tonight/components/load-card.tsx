@@ -153,6 +153,9 @@ export function LoadCard({ move, load, units, onChange }: Props) {
       : stop.yardName;
 
   const savePlacements = () => {
+    // Nothing typed at any drop: the truck's placed counts are left as they are (not zero), so
+    // left-behind and lost can be kept before the drop.
+    const anyPlaced = move.destinations.some((d) => (placed[d.id] ?? '').trim() !== '');
     const placements = move.destinations
       .map((d) => ({
         placeId: d.id,
@@ -163,12 +166,11 @@ export function LoadCard({ move, load, units, onChange }: Props) {
     const coloniesPlaced = placements.reduce((sum, p) => sum + p.colonies, 0);
     counts(
       {
-        placements,
-        coloniesPlaced,
+        ...(anyPlaced ? { placements, coloniesPlaced } : {}),
         ...leftBehindFields(),
         coloniesLost: numberOrNull(lost),
       },
-      `${coloniesPlaced} colonies placed`,
+      anyPlaced ? `${coloniesPlaced} colonies placed` : 'left behind and lost',
     );
     setSaidSaved('Placed counts kept.');
   };
