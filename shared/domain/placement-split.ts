@@ -32,8 +32,9 @@ const stopKey = (s: { yardId: string; lotId: string }) => `${s.yardId}:${s.lotId
  *
  * Colonies left behind stay in the yard they were left in: counted per stop they are exact, and a
  * truck's bare total is exact too when the truck had one stop. Only the bare totals of trucks with
- * several stops (an older phone, or the office typing a total) are shared over the origins in
- * proportion to what each still sends (largest remainder). Lost colonies fell off a moving truck
+ * several stops (an older phone, or the office typing a total), and any counted at a stop that is
+ * no longer an origin of the move, are shared over the origins in proportion to what each still
+ * sends (largest remainder). Lost colonies fell off a moving truck
  * whose load mixes its stops, so they are shared the same way over what was not left behind.
  */
 export function splitLeftAndLost(

@@ -49,6 +49,15 @@ describe('splitLeftAndLost', () => {
     expect(split).toEqual({ ok: true, leftBehind: [2, 1], lost: [0, 0] });
   });
 
+  it('when a stop counted is no longer an origin of the move then its colonies are shared out, not dropped', () => {
+    const gone = { yardId: 'y-gone', lotId: 'l-doubles' };
+    const split = splitLeftAndLost(
+      [dryFork, saltLick],
+      [truck({ coloniesLeftBehind: 3, leftBehindByStop: [{ ...gone, colonies: 3 }] })],
+    );
+    expect(split).toEqual({ ok: true, leftBehind: [2, 1], lost: [0, 0] });
+  });
+
   it('when colonies are lost on the road then the loss is shared over what was not left behind', () => {
     // After 20 left at Dry Fork both send 20, so 6 lost split 3 : 3.
     const split = splitLeftAndLost(
