@@ -236,6 +236,9 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
     );
   }
 
+  const hauls = night.trucks.map((load) =>
+    haulThrough(load.stops.map((stop) => Number(stop.yardId))),
+  );
   const trucks: PlannedTruck[] = night.trucks.map((load, i) => {
     const truck = facts.trucks[i];
     const stops: PlannedStop[] = load.stops.map((stop) => {
@@ -250,7 +253,7 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
         colonies: stop.colonies,
       };
     });
-    const { window, pickups } = haulThrough(load.stops.map((stop) => Number(stop.yardId)));
+    const { window, pickups } = hauls[i];
     return {
       key: truck.key,
       truckId: truck.truckId,
@@ -297,10 +300,7 @@ export function buildMovePlan(facts: PlanFacts): MovePlan {
 
   // The timeline shows the first truck that carries colonies; with none, the first origin's haul.
   const firstLoaded = night.trucks.findIndex((load) => load.stops.length > 0);
-  const main =
-    firstLoaded >= 0
-      ? haulThrough(night.trucks[firstLoaded].stops.map((stop) => Number(stop.yardId)))
-      : haulThrough(origins.length ? [0] : []);
+  const main = firstLoaded >= 0 ? hauls[firstLoaded] : haulThrough(origins.length ? [0] : []);
   const mainWindow = main.window;
 
   const sumOf = (pick: (t: PlannedTruck) => number) => trucks.reduce((s, t) => s + pick(t), 0);

@@ -82,7 +82,11 @@ export class YardsService {
     // page's yards, and a page is most of an operation's yards.
     const counts = await ledger.countsOn(this.db, actor.operationId, today(), { kind: 'yard' });
     const byYard = new Map<string, ColonyCount[]>();
-    for (const c of counts) byYard.set(c.placeId, [...(byYard.get(c.placeId) ?? []), c]);
+    for (const c of counts) {
+      const here = byYard.get(c.placeId);
+      if (here) here.push(c);
+      else byYard.set(c.placeId, [c]);
+    }
     return {
       items: page.items.map((y) => present(y, bySetup(byYard.get(y.id) ?? []))),
       total: page.total,
