@@ -15,6 +15,9 @@ const lotA = '55555555-5555-4555-8555-555555555555';
 const lotB = '66666666-6666-4666-8666-666666666666';
 
 const stop = (yardId: string, yardName: string, lotId: string, pallets: number) => ({
+  pickupOrder: yardId === yardA ? 1 : 2,
+  latitude: null,
+  longitude: null,
   yardId,
   yardName,
   lotId,

@@ -1,29 +1,12 @@
+import type { LoadSheetPage } from '@shared/schemas/load-sheet';
 import type { LoadRecord, MoveStatus, SyncKind, SyncOutcome } from '@shared/schemas/moves';
 export type { LoadRecord } from '@shared/schemas/moves';
 
-/** One truck of tonight's move, from the move's load sheet. */
-export interface TonightLoad {
-  loadId: string;
-  key: string;
-  truckName: string;
-  driverNames: string[];
-  pallets: number;
-  colonies: number;
-  departure: string | null;
-  arrival: string | null;
-  stops: Array<{
-    yardId: string;
-    yardName: string;
-    lotId: string;
-    lotName: string;
-    pallets: number;
-    colonies: number;
-    accessNotes: string;
-    civilDusk: string | null;
-    timeZone: string | null;
-  }>;
-  recorded: LoadRecord;
-}
+/** One truck of tonight's move: its load-sheet page, with the saved load the crew records on. */
+export type TonightLoad = Pick<
+  LoadSheetPage,
+  'key' | 'truckName' | 'driverNames' | 'pallets' | 'colonies' | 'departure' | 'arrival' | 'stops'
+> & { loadId: string; recorded: LoadRecord };
 
 /** A move of tonight (or tomorrow) with what the crew needs in the cab. */
 export interface TonightMove {
