@@ -1,4 +1,5 @@
 import { apportion } from './apportion';
+import { stopKey } from './pick-up-stops';
 
 /** Colonies a move takes from one yard's lot (one origin of the move). */
 export interface OriginColonies {
@@ -24,8 +25,6 @@ export type PlacementSplit =
   /** More left behind at one origin (by its index) than the move takes from it. */
   | { ok: false; origin: number; leftBehind: number };
 
-const stopKey = (s: { yardId: string; lotId: string }) => `${s.yardId}:${s.lotId}`;
-
 /**
  * How many of each origin's colonies stay in the yard and how many are lost on the road, given
  * the trucks' records.
@@ -34,8 +33,8 @@ const stopKey = (s: { yardId: string; lotId: string }) => `${s.yardId}:${s.lotId
  * truck's bare total is exact too when the truck had one stop. Only the bare totals of trucks with
  * several stops (an older phone, or the office typing a total), and any counted at a stop that is
  * no longer an origin of the move, are shared over the origins in proportion to what each still
- * sends (largest remainder). Lost colonies fell off a moving truck
- * whose load mixes its stops, so they are shared the same way over what was not left behind.
+ * sends (largest remainder). Lost colonies fell off a moving truck whose load mixes its stops, so
+ * they are shared the same way over what was not left behind.
  */
 export function splitLeftAndLost(
   origins: readonly OriginColonies[],

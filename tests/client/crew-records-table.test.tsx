@@ -1,6 +1,7 @@
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { CrewRecordsTable } from '@/features/moves/components/crew-records-table';
+import { nothingRecorded } from '@shared/schemas/moves';
 import type { LoadSheetPage } from '@/features/moves/types';
 
 const yardA = '33333333-3333-4333-8333-333333333333';
@@ -70,5 +71,18 @@ describe('Crew records by truck and yard', () => {
     expect(within(truck).getByTestId('truck-loaded').textContent).toBe('—');
     expect(truck.textContent).toContain('Not kept');
     expect(truck.textContent).toContain('— · — · —');
+  });
+  it('when a one-stop truck has only a truck total then its yard row shows it', () => {
+    const oneStop = {
+      ...page,
+      stops: [page.stops[0]],
+      recorded: { ...nothingRecorded, palletsLoaded: 11, coloniesLeftBehind: 3 },
+    };
+    render(<CrewRecordsTable pages={[oneStop]} />);
+    const row = screen
+      .getByRole('table', { name: 'Crew records' })
+      .querySelector('[data-crew-stop="Dry Fork"]') as HTMLElement;
+    expect(within(row).getAllByRole('cell')[2].textContent).toBe('11');
+    expect(within(row).getByTestId('stop-left-behind').textContent).toBe('3 left in this yard');
   });
 });

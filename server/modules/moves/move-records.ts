@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../middleware/authorise';
 import type { loadRecordFields, moveWeightsFields } from '../../../shared/schemas/moves';
+import { stopKey } from '../../../shared/domain/pick-up-stops';
 import { MoveLoad } from './move-load.entity';
 import { MoveOrigin } from './move-origin.entity';
 import { plannedStopsOf, presentLoad } from './move-planning';
@@ -34,8 +35,6 @@ async function loadOf(tx: EntityManager, actor: Actor, moveId: string, loadId: s
   return load;
 }
 
-const stopKey = (s: { yardId: string; lotId: string }) => `${s.yardId}:${s.lotId}`;
-
 /**
  * The pick-up stops (yard and lot) of one load with the colonies it takes at each: from its saved
  * plan, else the move's origins (whole origins, an upper bound for one truck).
@@ -49,17 +48,13 @@ async function stopsOf(tx: EntityManager, actor: Actor, moveId: string, load: Mo
 
 /**
  * Checks counts given per pick-up stop (`field` names them in errors) against the load's stops:
- * each must be one of the truck's stops, and none counted twice. Returns the stops.
+ * each must be one of the truck's stops, and none counted twice.
  */
-async function checkStops(
-  tx: EntityManager,
-  actor: Actor,
-  moveId: string,
-  load: MoveLoad,
+function checkStops(
+  stops: Map<string, number>,
   field: 'palletsByStop' | 'leftBehindByStop',
   counts: Array<{ yardId: string; lotId: string }>,
 ) {
-  const stops = await stopsOf(tx, actor, moveId, load);
   const seen = new Set<string>();
   counts.forEach((c, i) => {
     const stop = stopKey(c);
@@ -75,7 +70,6 @@ async function checkStops(
     }
     seen.add(stop);
   });
-  return stops;
 }
 
 /**
@@ -124,16 +118,20 @@ export const moveRecords = {
   ) {
     const move = await recordableMove(tx, actor, moveId);
     const load = await loadOf(tx, actor, moveId, loadId);
+    const stops =
+      fields.palletsByStop || fields.leftBehindByStop
+        ? await stopsOf(tx, actor, moveId, load)
+        : new Map<string, number>();
     let palletsLoaded = fields.palletsLoaded;
     if (fields.palletsByStop) {
-      await checkStops(tx, actor, moveId, load, 'palletsByStop', fields.palletsByStop);
+      checkStops(stops, 'palletsByStop', fields.palletsByStop);
       const sum = fields.palletsByStop.reduce((total, c) => total + c.pallets, 0);
       palletsLoaded = totalOfParts('palletsLoaded', palletsLoaded, sum, 'The stops');
     }
     let coloniesLeftBehind = fields.coloniesLeftBehind;
     if (fields.leftBehindByStop) {
       const byStop = fields.leftBehindByStop;
-      const stops = await checkStops(tx, actor, moveId, load, 'leftBehindByStop', byStop);
+      checkStops(stops, 'leftBehindByStop', byStop);
       byStop.forEach((c, i) => {
         const planned = stops.get(stopKey(c)) ?? 0;
         if (c.colonies > planned) {

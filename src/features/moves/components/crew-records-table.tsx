@@ -1,3 +1,4 @@
+import { recordedAtStop } from '@shared/domain/pick-up-stops';
 import { preRollItems, preRollMissing } from '@shared/domain/pre-roll-check';
 import { formatCount } from '@/lib/units';
 import { nothingRecorded } from '@shared/schemas/moves';
@@ -61,10 +62,20 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
                 </td>
               </tr>
               {page.stops.map((stop) => {
-                const atStop = (c: { yardId: string; lotId: string }) =>
-                  c.yardId === stop.yardId && c.lotId === stop.lotId;
-                const loaded = byStop?.find(atStop)?.pallets;
-                const left = recorded.leftBehindByStop?.find(atStop)?.colonies;
+                const loaded = recordedAtStop(
+                  byStop,
+                  recorded.palletsLoaded,
+                  page.stops,
+                  stop,
+                  (c) => c.pallets,
+                );
+                const left = recordedAtStop(
+                  recorded.leftBehindByStop,
+                  recorded.coloniesLeftBehind,
+                  page.stops,
+                  stop,
+                  (c) => c.colonies,
+                );
                 return (
                   <tr key={`${stop.yardId}-${stop.lotId}`} data-crew-stop={stop.yardName}>
                     <td className="py-1 pr-3 pl-4 text-dusk-200">
@@ -74,7 +85,7 @@ export function CrewRecordsTable({ pages }: { pages: LoadSheetPage[] }) {
                       {formatCount(stop.pallets)}
                     </td>
                     <td className="py-1 pr-3 text-right text-dusk-200">
-                      {byStop ? count(loaded ?? 0) : '—'}
+                      {count(byStop ? (loaded ?? 0) : loaded)}
                     </td>
                     <td />
                     <td className="py-1 pr-3 text-dusk-200" data-testid="stop-left-behind">

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { Units } from '@shared/schemas/users';
 import type { PreRollCheck } from '@shared/schemas/moves';
+import { recordedAtStop, type StopRef } from '@shared/domain/pick-up-stops';
 import { preRollItems, preRollMissing, type PreRollItem } from '@shared/domain/pre-roll-check';
 import { weightToKg, weightUnit } from '@/lib/units';
 import type { NewChange } from '../lib/offline-queue';
@@ -68,9 +69,8 @@ export function LoadCard({ move, load, units, onChange }: Props) {
   // Pallets are counted per pick-up stop; a truck total recorded without stops (by the office, or
   // an older phone) stands for the only stop of a one-stop truck.
   const byStop = recorded.palletsByStop;
-  const loadedAt = (stop: TonightLoad['stops'][number]) =>
-    byStop?.find((c) => c.yardId === stop.yardId && c.lotId === stop.lotId)?.pallets ??
-    (!byStop && load.stops.length === 1 ? (recorded.palletsLoaded ?? 0) : 0);
+  const loadedAt = (stop: StopRef) =>
+    recordedAtStop(byStop, recorded.palletsLoaded, load.stops, stop, (c) => c.pallets) ?? 0;
   const loadedTotal = byStop
     ? byStop.reduce((sum, c) => sum + c.pallets, 0)
     : (recorded.palletsLoaded ?? 0);
@@ -117,9 +117,8 @@ export function LoadCard({ move, load, units, onChange }: Props) {
   // Colonies left behind are counted per pick-up stop, so the ledger keeps them in their yard; a
   // truck total recorded without stops stands for the only stop of a one-stop truck.
   const leftByStop = recorded.leftBehindByStop;
-  const leftAt = (stop: TonightLoad['stops'][number]) =>
-    leftByStop?.find((c) => c.yardId === stop.yardId && c.lotId === stop.lotId)?.colonies ??
-    (!leftByStop && load.stops.length === 1 ? recorded.coloniesLeftBehind : null);
+  const leftAt = (stop: StopRef) =>
+    recordedAtStop(leftByStop, recorded.coloniesLeftBehind, load.stops, stop, (c) => c.colonies);
   const [leftBehind, setLeftBehind] = useState<string[]>(() =>
     load.stops.map((stop) => String(leftAt(stop) ?? '')),
   );
