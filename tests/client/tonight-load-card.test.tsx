@@ -29,7 +29,7 @@ const stop = (yardId: string, yardName: string, lotId: string, pallets: number) 
   timeZone: 'America/Chicago',
 });
 
-function card(recorded: Partial<LoadRecord> = {}) {
+function card(recorded: Partial<LoadRecord> = {}, times: Partial<TonightLoad> = {}) {
   const load: TonightLoad = {
     loadId: '22222222-2222-4222-8222-222222222222',
     key: 'truck-1',
@@ -41,6 +41,7 @@ function card(recorded: Partial<LoadRecord> = {}) {
     arrival: null,
     stops: [stop(yardA, 'Dry Fork', lotA, 12), stop(yardB, 'Salt Lick', lotB, 6)],
     recorded: { ...nothingRecorded, version: 3, ...recorded },
+    ...times,
   };
   const move: TonightMove = {
     id: '11111111-1111-4111-8111-111111111111',
@@ -116,6 +117,13 @@ describe('Tonight load card', () => {
     const change = onChange.mock.calls[0][0];
     expect(Object.keys(change.payload)).toEqual(['coloniesLost']);
     expect(change.label).toBe('Rig Amber: left behind and lost');
+  });
+
+  it("when the truck has planned times then they read on each place's clock, as on the printed sheet", () => {
+    card({}, { departure: '2027-02-01T21:40:00-06:00', arrival: '2027-02-02T04:05:00-08:00' });
+    expect(screen.getByText(/^Planned: rolls/).textContent).toBe(
+      'Planned: rolls Mon 9:40 PM CST (UTC−6), arrives Tue 4:05 AM (UTC−8).',
+    );
   });
 
   it('when the crew keeps the pre-roll check then the ticked items and the time go with it', async () => {

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { Units } from '@shared/schemas/users';
 import type { PreRollCheck } from '@shared/schemas/moves';
+import { formatLocalTime } from '@shared/domain/local-time';
 import { recordedAtStop, type StopRef } from '@shared/domain/pick-up-stops';
 import { preRollItems, preRollMissing, type PreRollItem } from '@shared/domain/pre-roll-check';
 import { weightToKg, weightUnit } from '@/lib/units';
@@ -14,9 +15,6 @@ interface Props {
   units: Units;
   onChange: (change: NewChange) => void;
 }
-
-/** "20:34 (UTC-06:00)": the wall clock of the place, as the API wrote it. */
-const clock = (iso: string | null) => (iso ? `${iso.slice(11, 16)} (UTC${iso.slice(19)})` : '—');
 
 /** A moment recorded on the phone, in the phone's own time. */
 const deviceClock = (iso: string) =>
@@ -389,7 +387,9 @@ export function LoadCard({ move, load, units, onChange }: Props) {
       )}
       {load.departure && (
         <p className="tn-muted text-sm">
-          Planned: rolls {clock(load.departure)}, arrives {clock(load.arrival)}.
+          {/* On each place's clock, as on the printed load sheet. */}
+          Planned: rolls {formatLocalTime(load.departure, load.stops.at(-1)?.timeZone)}, arrives{' '}
+          {formatLocalTime(load.arrival)}.
         </p>
       )}
     </article>
