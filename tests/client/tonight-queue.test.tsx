@@ -107,6 +107,25 @@ describe('OfflineQueue', () => {
     expect(onApplied).toHaveBeenCalledTimes(1);
   });
 
+  it('when a change is made before the view caught up with an applied one then it builds on the version that one produced', async () => {
+    const server = applyingServer();
+    const queue = new OfflineQueue(memoryStorage(), server.send);
+    await queue.enqueue(counts(3)); // made on version 1
+    await queue.sync(); // applied: the load is at version 2
+    // The view was not fetched again (no signal): the next change is still made on version 1.
+    await queue.enqueue({ ...counts(4), payload: { coloniesLeftBehind: 2 } });
+    await queue.sync();
+    expect(server.batches.map((b) => b.map((c) => c.version))).toEqual([[1], [2]]);
+    expect(queue.getState().changes).toEqual([]);
+
+    // Someone else's change in between is still a conflict: the server is past what we made.
+    server.versions.load += 1;
+    await queue.enqueue({ ...counts(5), baseVersion: 1 });
+    await queue.sync();
+    expect(server.batches.at(-1)!.map((c) => c.version)).toEqual([3]);
+    expect(queue.getState().changes.map((c) => c.state)).toEqual(['conflict']);
+  });
+
   it('when a retried batch comes back as duplicates then they leave the queue too', async () => {
     const send: SendChanges = async (changes) => ({
       results: changes.map((c, index) => ({

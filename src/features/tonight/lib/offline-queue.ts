@@ -48,6 +48,12 @@ export class OfflineQueue {
   private seq = 0;
   /** Who is signed in: changes are stamped with them, and only theirs are sent. */
   private userId: string | null = null;
+  /**
+   * Per record, the version each of this device's applied changes was made on → the version it
+   * produced. The view catches up only when Tonight is fetched again (which may fail with no
+   * signal); until then a new change is made on a version this device has itself moved past.
+   */
+  private produced = new Map<string, Map<number, number>>();
 
   constructor(
     private readonly storage: TonightStorage,
@@ -120,6 +126,7 @@ export class OfflineQueue {
     }
     await this.save({
       ...input,
+      ...this.caughtUp(input),
       ...(this.userId ? { madeBy: this.userId } : {}),
       idempotencyKey: newKey(),
       seq: ++this.seq,
@@ -239,10 +246,29 @@ export class OfflineQueue {
     }
   }
 
+  /**
+   * The change's base version moved past this device's own applied changes: made on a view that
+   * has not caught up with them, it builds on what they produced (someone else's change since
+   * still shows as a conflict, as the server's version is then newer still).
+   */
+  private caughtUp(input: NewChange): { baseVersion?: number } {
+    const record = recordOf(input);
+    const chain = record ? this.produced.get(record) : undefined;
+    let version = input.baseVersion;
+    if (!chain || version === undefined) return {};
+    while (chain.has(version)) version = chain.get(version)!;
+    return { baseVersion: version };
+  }
+
   /** Changes made on top of `applied` now build on the version it produced. */
   private async rebase(applied: QueuedChange, version: number | undefined) {
     const record = recordOf(applied);
     if (!record || version === undefined) return;
+    if (applied.baseVersion !== undefined) {
+      const chain = this.produced.get(record) ?? new Map<number, number>();
+      chain.set(applied.baseVersion, version);
+      this.produced.set(record, chain);
+    }
     for (const c of this.state.changes) {
       if (c.state !== 'waiting' || recordOf(c) !== record || c.baseVersion !== applied.baseVersion)
         continue;
