@@ -193,6 +193,7 @@ describe('SyncBar', () => {
     expect(record.textContent).toContain('Pallets loaded40');
     // Never dropped silently: it stays on the device until the crew chooses.
     expect((await storage.listChanges())[0].state).toBe('conflict');
+    expect(screen.getByTestId('sync-status').textContent).toBe('1 change the office did not take');
 
     await user.click(within(problems).getByRole('button', { name: 'Redo mine on top' }));
     await screen.findByText('Everything is sent');

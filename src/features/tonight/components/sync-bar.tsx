@@ -21,7 +21,10 @@ export function SyncBar() {
             ? waitingLabel(waiting.length)
             : state.syncing
               ? 'Sending…'
-              : 'Everything is sent'}
+              : problems.length > 0
+                ? // Not "everything is sent" while the office has turned something away.
+                  `${problems.length} ${problems.length === 1 ? 'change' : 'changes'} the office did not take`
+                : 'Everything is sent'}
         </span>
         {(!online || state.unreachable) && (
           <span className="tn-alert rounded border px-2 py-0.5 text-sm">
